@@ -1,0 +1,5 @@
+module github.com/gyprisk/gyprisk
+
+go 1.26.8
+
+require github.com/spf13/pflag v1.1.0
