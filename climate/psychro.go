@@ -2,10 +2,19 @@ package climate
 
 import "math"
 
-// Psychrometrics after ISO 13788:2012, Annex E (saturation vapour pressure
-// as a function of temperature, the building-physics convention). One
-// formula is used throughout gyprisk, so that dew points, surface humidities
-// and condensation all agree with each other.
+// Psychrometrics after ISO 13788:2012 (saturation vapour pressure as a
+// function of temperature, the building-physics convention). One formula is
+// used throughout gyprisk, so that dew points, surface humidities and
+// condensation all agree with each other.
+//
+// The annex letter and equation numbers cited below (Annex E, E.7, E.8)
+// are from memory: the text of the standard was not available to check
+// them. The coefficients are checked instead against IAPWS in
+// psychro_test.go: over water the formula is within 0.2 % of the IAPWS-95
+// saturation line (Wagner & Pruss 2002, J. Phys. Chem. Ref. Data 31) from
+// 0 to 80 °C; over ice it is within 0.2 % of the IAPWS R14-08(2011)
+// sublimation curve down to −10 °C, 0.5 % at −20 °C, 1 % at −30 °C and
+// 1.8 % at −40 °C (always low).
 
 // RvJPerKgK is the specific gas constant of water vapour,
 // R/M = 8.314462618 / 0.01801528 = 461.52 J/(kg·K)
@@ -21,8 +30,8 @@ const KelvinOffset = 273.15
 //	p_sat = 610.5 · exp(17.269·θ / (237.3 + θ))
 //
 // θ in °C, p_sat in Pa. Valid for −40 ≤ θ ≤ 80 °C (supercooled water below
-// 0 °C). Source: ISO 13788:2012, Annex E, equation (E.7); the Magnus form
-// with Tetens' coefficients.
+// 0 °C). Source: ISO 13788:2012, Annex E, equation (E.7) (annex and equation
+// number from memory); the Magnus form.
 func SatVapourPressureWaterPa(tempC float64) float64 {
 	return 610.5 * math.Exp(17.269*tempC/(237.3+tempC))
 }
@@ -32,7 +41,8 @@ func SatVapourPressureWaterPa(tempC float64) float64 {
 //	p_sat = 610.5 · exp(21.875·θ / (265.5 + θ))
 //
 // θ in °C, p_sat in Pa. Valid for −40 ≤ θ ≤ 0 °C.
-// Source: ISO 13788:2012, Annex E, equation (E.8).
+// Source: ISO 13788:2012, Annex E, equation (E.8) (annex and equation
+// number from memory).
 func SatVapourPressureIcePa(tempC float64) float64 {
 	return 610.5 * math.Exp(21.875*tempC/(265.5+tempC))
 }
