@@ -121,6 +121,8 @@ type Reader struct {
 	ReaderConfig
 
 	br      *bufio.Reader
+	size    int64 // bytes in the input when known (for ReadAll's capacity), else -1
+	nread   int64 // bytes consumed by readLine
 	started bool
 	err     error // sticky
 
@@ -147,7 +149,18 @@ type Reader struct {
 
 // NewReader returns a Reader reading from r.
 func NewReader(r io.Reader) *Reader {
-	return &Reader{br: bufio.NewReaderSize(r, 64<<10)}
+	size := int64(-1)
+	switch v := r.(type) {
+	case interface{ Len() int }: // bytes.Reader, strings.Reader, bytes.Buffer
+		size = int64(v.Len())
+	case *os.File:
+		if st, err := v.Stat(); err == nil && st.Mode().IsRegular() {
+			if off, err := v.Seek(0, io.SeekCurrent); err == nil {
+				size = st.Size() - off
+			}
+		}
+	}
+	return &Reader{br: bufio.NewReaderSize(r, 64<<10), size: size}
 }
 
 // ColumnSet returns the columns found in the header (valid after the first
@@ -174,7 +187,16 @@ func (r *Reader) Read() (Record, error) {
 // ReadAll reads the remaining records into a Series.
 func (r *Reader) ReadAll() (*Series, error) {
 	s := &Series{Name: r.FileName, Location: r.Location}
+	const probe = 64
 	for {
+		if len(s.Records) == probe && r.size > 0 && r.nread > 0 {
+			// Size the slice from the bytes per line so far, to avoid
+			// growing and copying a 30-year record a dozen times.
+			perLine := float64(r.nread) / float64(r.stats.Lines)
+			if est := int(float64(r.size-r.nread)/perLine*1.02) + probe + 16; est > cap(s.Records) && est < 1<<26 {
+				s.Records = append(make([]Record, 0, est), s.Records...)
+			}
+		}
 		rec, err := r.Read()
 		if err == io.EOF {
 			break
@@ -251,6 +273,7 @@ func (r *Reader) readLine() ([]byte, error) {
 	}
 	r.line++
 	r.stats.Lines++
+	r.nread += int64(len(line))
 	if n := len(line); n > 0 && line[n-1] == '\n' {
 		line = line[:n-1]
 	}
