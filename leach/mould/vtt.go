@@ -5,10 +5,10 @@ import (
 	"math"
 )
 
-// maxGrowthTempC is the upper temperature limit of growth. Hukka & Viitanen
-// fitted their regressions to tests between about 5 and 40 °C; the limit of
-// 50 °C is the one the cross-check implementation (Laukkarinen) uses (from
-// memory, not read in the papers).
+// maxGrowthTempC is the upper temperature limit of growth. Viitanen's tests
+// behind the regressions spanned roughly 5–40 °C (from memory); the limit of
+// 50 °C is the one the cross-check implementation (Laukkarinen) uses, not a
+// value read in the papers.
 const maxGrowthTempC = 50
 
 // Decline rates of pine sapwood in unfavourable conditions, per hour, by the
