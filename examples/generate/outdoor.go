@@ -88,8 +88,8 @@ const (
 	anomTauH       = 80   // correlation time of the temperature anomaly
 	windWeibullK   = 2.0  // Weibull shape of the hourly wind speed
 	windScaleMS    = 5.25 // Weibull scale, annual mean (mean = λ·Γ(1+1/k))
-	rainSpellStay  = 0.82 // probability that a wet hour is followed by another
-	rainStartBase  = 0.006
+	rainSpellStay  = 0.78 // probability that a wet hour is followed by another
+	rainStartBase  = 0.0145
 	rainMeanMMPerH = 0.95 // mean intensity of ordinary (frontal) rain hours
 )
 
@@ -163,7 +163,7 @@ func simulateOutdoor(r *rand.Rand, start time.Time, hours int) []hour {
 			if raining {
 				raining = r.Float64() < rainSpellStay+0.06*math.Tanh(s)
 			} else {
-				p := math.Min(0.5, rainStartBase*wetSeason*math.Exp(1.5*s))
+				p := math.Min(0.5, rainStartBase*wetSeason*math.Exp(0.8*s))
 				raining = r.Float64() < p
 			}
 		} else {

@@ -171,7 +171,7 @@ func simulateBasement(r *rand.Rand, outdoor []hour, start time.Time, steps int) 
 		clim := meanTempC - seasonAmpC*math.Cos(2*math.Pi*(doy-coldestDay)/365.25)
 		a := anom120.add(tOut - clim)
 		tempC := 13.5 - 3.2*math.Cos(2*math.Pi*(doy-80)/365.25) + 0.15*a + 0.08*slow.next(r)
-		p := 0.45*vap48.add(pOut) + 0.55*0.86*climate.SatVapourPressureWaterPa(tempC) + 90
+		p := 0.45*vap48.add(pOut) + 0.55*0.86*climate.SatVapourPressureWaterPa(tempC) + 80
 
 		if visitLeft == 0 && r.Float64() < 0.004 && mid.Hour() >= 8 && mid.Hour() < 20 {
 			visitLeft = 1 + r.IntN(3)
