@@ -114,7 +114,9 @@ const (
 //     mean vector (from 235° when cyclonic, from 60° when anticyclonic)
 //     plus a wandering AR(1) vector;
 //   - solar: Haurwitz clear sky, hourly mean, times the Kasten–Czeplak cloud
-//     factor, times 0.6 in rain.
+//     factor, times 0.6 in rain;
+//   - scripted spells (episodes): settled weather on fixed dates, each hot
+//     spell ending in a thunderstorm on its last afternoon.
 func simulateOutdoor(r *rand.Rand, start time.Time, hours int) []hour {
 	out := make([]hour, hours)
 	syn := newAR1(synopticTauH, 1)

@@ -40,18 +40,18 @@ func (m *runningMean) add(x float64) float64 {
 //
 //   - temperature: heated to 20.5 °C from 06:00 to 23:00 and 18.5 °C at
 //     night while the 3-day outdoor mean is below 14 °C; otherwise free
-//     running at 14 + 0.45 × (3-day outdoor mean), so summer follows the
+//     running at 15 + 0.45 × (3-day outdoor mean), so summer follows the
 //     outdoors a little; a first-order lag of 3 h; showers warm the room
 //     by up to 1 K;
 //   - vapour pressure: outdoor (1-day mean) plus a moisture excess of
-//     120 Pa in summer rising linearly to 520 Pa when the 3-day outdoor
+//     60 Pa in summer rising linearly to 760 Pa when the 3-day outdoor
 //     mean is 0 °C (a poorly ventilated room: closed windows, no extract
 //     fan), in the manner of the ISO 13788 humidity-class excesses;
-//   - showers: on most mornings (later at weekends) and many evenings, 15 to
-//     45 minutes with the air approaching 98 % RH, then an exponential
-//     decay of the excess vapour with a time constant of 75 min in winter
-//     and 40 min in summer; computed minute by minute and averaged to the
-//     hour.
+//   - showers (planShowers): on most mornings and many evenings, the air
+//     approaching 99 % RH (rise time constant 3 min), then an exponential
+//     decay of the excess vapour with a time constant of 90 min in the
+//     heating season and 60 min outside it; computed minute by minute and
+//     averaged to the hour.
 func simulateBathroom(r *rand.Rand, outdoor []hour) []reading {
 	out := make([]reading, len(outdoor))
 	mean72 := newRunningMean(72, 1)
@@ -116,9 +116,9 @@ func simulateBathroom(r *rand.Rand, outdoor []hour) []reading {
 type showerSpell struct{ from, to time.Time }
 
 // planShowers draws the day's showers: a morning one on 90 % of days
-// (06:20–07:50 UTC on weekdays, 08:00–10:00 at weekends) lasting 20–45 min
-// (one or two people), and an evening one on 70 % of days (20:00–22:30,
-// 15–30 min).
+// (starting 06:20–07:50 UTC on weekdays, 08:00–10:00 at weekends) lasting
+// 25–50 min (one or two people), and an evening one on 70 % of days
+// (starting 20:00–22:30, 20–35 min).
 func planShowers(r *rand.Rand, midnight time.Time) []showerSpell {
 	var s []showerSpell
 	add := func(fromH, spanH, minMin, maxMin float64) {
@@ -148,10 +148,11 @@ func planShowers(r *rand.Rand, midnight time.Time) []showerSpell {
 //     lagging the air by about two months (coldest late March, warmest
 //     mid-September), plus 0.15 × the outdoor 5-day anomaly and a slow
 //     AR(1) (6 h, 0.08 K);
-//   - vapour pressure: 0.6 × the outdoor 2-day mean plus 0.4 × the vapour
-//     pressure in equilibrium with damp walls at 88 % RH, so the room is
-//     dampest in late summer when warm humid air meets cool walls; RH is
-//     bounded softly at 97 %;
+//   - vapour pressure: 0.45 × the outdoor 2-day mean plus 0.55 × the vapour
+//     pressure in equilibrium with damp walls at 86 % RH plus 80 Pa of
+//     moisture from the walls, so the room is dampest in late summer when
+//     warm humid air meets cool walls; RH above 94 % is bounded softly
+//     at 97 %;
 //   - visits: the door is opened a few times a week for 15–45 min (air a
 //     little warmer and more humid), which shows in a 15-minute record;
 //   - logger noise: 0.3 % RH.
