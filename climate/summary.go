@@ -212,8 +212,12 @@ func Summarise(s *Series) (*Summary, error) {
 			sum.DrivingRain = append(sum.DrivingRain, DrivingRainRow{AzimuthDeg: az, LPerM2PerYear: Float(idx[k])})
 		}
 		if y := float64(sum.Years); y < 10 {
-			sum.DrivingRainNote = "airfield index from " + strconv.FormatFloat(y, 'f', 1, 64) +
-				" years of record; ISO 15927-3 asks for at least 10, so treat it as indicative"
+			span := strconv.FormatFloat(y, 'f', 1, 64) + " years"
+			if y < 1 {
+				span = strconv.FormatFloat(math.Round(float64(sum.HoursCovered)), 'f', 0, 64) + " hours"
+			}
+			sum.DrivingRainNote = "airfield index from " + span +
+				" of record; ISO 15927-3 asks for at least 10 years, so treat it as indicative"
 		}
 	case errors.Is(err, ErrNoColumn), errors.Is(err, ErrTooShort), errors.Is(err, ErrCoarse):
 		sum.DrivingRainNote = err.Error()
