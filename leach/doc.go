@@ -1,0 +1,57 @@
+// Package leach is gyprisk's gypsum chemistry: equilibrium constants of
+// gypsum (CaSO4·2H2O), bassanite (hemihydrate, CaSO4·0.5H2O), anhydrite
+// (CaSO4) and the CaSO4° ion pair from one pinned thermodynamic database,
+// the activity model of that database, the solubility of each phase, the
+// stability of gypsum against dehydration, the dissolution rate of gypsum
+// and the saturation a water film reaches on a gypsum surface, and the molar
+// volumes that give the swelling of rehydration and the shrinkage of
+// dehydration.
+//
+// # One database
+//
+// Every constant comes from one file, llnl.dat of the USGS PHREEQC
+// distribution (see DatabaseName, DatabaseVersion and DatabaseSource), so
+// solubility and dehydration can never disagree with each other: the
+// dehydration free energy is formed from the same log K that fix the
+// solubilities. The file's analytic log K(T) expressions are used, as
+// PHREEQC uses them (an analytic expression takes precedence over log_k and
+// delta_h). They are fits to the LLNL grid from 0 to 300 °C and do not
+// reproduce the file's own 25 °C log_k exactly: they differ by 0.04 to 0.05
+// log units for all four reactions (see the tests). The activity model is
+// the database's B-dot (extended Debye–Hückel) model with its tabulated A(T),
+// B(T) and Ḃ(T) and ion sizes.
+//
+// # Known limits of the database
+//
+// llnl.dat puts the gypsum–anhydrite equilibrium in liquid water at about
+// 44 °C, inside the published spread (38–42 °C from solubility measurements,
+// 58 ± 2 °C from Hardie 1967, Am. Mineral. 52, 171). It puts the
+// gypsum–bassanite equilibrium in liquid water at about 125 °C, some 25 K
+// above the 99 °C that Power, Fabuss & Satterfield measured for
+// α-hemihydrate (J. Chem. Eng. Data, 1964). Bassanite is therefore
+// predicted to form at higher temperature or drier air than it really does:
+// for dehydration risk the database is on the unsafe side, and the tests
+// record this bias rather than hide it.
+//
+// # Kinetics
+//
+// The anhydrite route is kinetically hindered at ordinary temperatures:
+// gypsum persists for centuries where anhydrite is the stable phase (below
+// about 80 % RH at 25 °C), and anhydrite in contact with water hydrates only
+// slowly. In-service dehydration risk is therefore judged on the bassanite
+// route. No rate law for the dehydration of gypsum could be verified against
+// its source, so none is implemented: the package reports the
+// thermodynamic driving force only.
+//
+// Dissolution follows the rate law of Jeschke, Vosbeck & Dreybrodt 2001
+// (Geochim. Cosmochim. Acta 65, 27–34), linear up to 0.94 of saturation and
+// of order n above it, in series with diffusion through the water film
+// (FilmSaturation).
+//
+// # Units
+//
+// Temperatures in °C, molalities in mol/kg of water, concentrations in
+// mol/m³ (= mmol/L) or g/L of solution, free energies in J/mol, lengths in
+// m, times in s. The package never prints, exits or logs; bad input becomes
+// an error or, where the signature has no error, NaN.
+package leach
