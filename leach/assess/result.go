@@ -18,6 +18,11 @@ type Output struct {
 	Scenarios  []Scenario      `json:"scenarios"`
 	Elements   []ElementResult `json:"elements"`
 	Notes      []string        `json:"notes"` // repaired or dropped values, assumptions the run had to make
+
+	// Invented is true when the site and climate are invented example data
+	// (the demo, the examples). The report then prints "Invented example
+	// data — not a real building" on the cover and on every page.
+	Invented bool `json:"invented_example_data"`
 }
 
 // Tool names the program that made the output.
@@ -100,8 +105,9 @@ type Scenario struct {
 type ElementResult struct {
 	ID           string          `json:"id"`
 	Label        string          `json:"label"`
-	Variant      string          `json:"variant"`  // "base" for the element itself
-	Scenario     string          `json:"scenario"` // "present" for the record as is
+	Description  string          `json:"description,omitempty"` // free text from the project file, for the report
+	Variant      string          `json:"variant"`               // "base" for the element itself
+	Scenario     string          `json:"scenario"`              // "present" for the record as is
 	Material     string          `json:"material"`
 	Exposure     string          `json:"exposure"` // "exterior" | "interior"
 	Inputs       ElementInputs   `json:"inputs"`
@@ -132,6 +138,7 @@ type ElementInputs struct {
 	TopographyFactor   float64 `json:"topography_factor"`
 	ObstructionFactor  float64 `json:"obstruction_factor"`
 	RunoffHeightM      float64 `json:"runoff_height_m"`
+	FlowLengthM        float64 `json:"flow_length_m"`
 	SolarAbsorptance   float64 `json:"solar_absorptance"`
 	ThicknessMM        float64 `json:"thickness_mm"`
 	LossLimitMM        float64 `json:"loss_limit_mm"`
