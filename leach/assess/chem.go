@@ -20,7 +20,7 @@ type chemistry struct {
 	// −R·T·ln10·(log K_gypsum − log K_phase) + ν·R·T·ln a_w
 	// (at equilibrium ΔG = 0 gives ν·ln a_w,eq = ln10·(log K_gypsum − log K_phase)).
 	lnAwEqBas, lnAwEqAnh []float64
-	law                  leach.RateLaw
+	film                 *leach.FilmModel // the Jeschke et al. 2001 rate law with diffusion across the film
 }
 
 const (
@@ -34,7 +34,11 @@ func newChemistry() (*chemistry, error) {
 	if err != nil {
 		return nil, err
 	}
-	c := &chemistry{sol: sol, law: leach.Jeschke2001(sol)}
+	film, err := leach.NewFilmModel(leach.Jeschke2001(sol), chemMinC, chemMaxC, chemStepC)
+	if err != nil {
+		return nil, err
+	}
+	c := &chemistry{sol: sol, film: film}
 	n := int(math.Round((chemMaxC-chemMinC)/chemStepC)) + 1
 	c.lnAwEqBas = make([]float64, n)
 	c.lnAwEqAnh = make([]float64, n)

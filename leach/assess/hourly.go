@@ -352,20 +352,20 @@ func (r *elementRun) step(i int, h *hourState, mm *mould.Model) {
 // (condensate, or a film slower than the interval) is in contact for the
 // whole interval.
 func (r *elementRun) filmSaturation(waterL, tempC, slopeDeg, dtS float64) float64 {
-	return filmSat(r.chem.law, waterL, tempC, slopeDeg, r.e.flowLengthM, dtS, 1, 1)
+	return filmSat(r.chem.film, waterL, tempC, slopeDeg, r.e.flowLengthM, dtS, 1, 1)
 }
 
 // filmSat is filmSaturation with multipliers on the film thickness and the
 // contact time (the Monte Carlo inputs of the contact model).
-func filmSat(law leach.RateLaw, waterL, tempC, slopeDeg, flowLengthM, dtS, thickMul, contactMul float64) float64 {
+func filmSat(film *leach.FilmModel, waterL, tempC, slopeDeg, flowLengthM, dtS, thickMul, contactMul float64) float64 {
 	// Flow per metre of width at the foot of the element, m²/s.
 	q := waterL * 1e-3 * flowLengthM / dtS
-	delta, v := leach.FallingFilm(q, slopeDeg, clampChem(tempC))
+	delta, v := film.Film(q, slopeDeg, tempC)
 	if math.IsNaN(delta) || !(v > 0) {
 		return 1
 	}
 	contact := math.Min(flowLengthM/v*contactMul, dtS)
-	s := leach.FilmSaturation(law, clampChem(tempC), delta*thickMul, contact)
+	s := film.Saturation(tempC, delta*thickMul, contact)
 	if math.IsNaN(s) {
 		return 1
 	}

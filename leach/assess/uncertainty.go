@@ -91,8 +91,7 @@ func draw(seed uint64, k int) [numMC]float64 {
 // absorptance through its linearisation ∂θ_s/∂α = I/(h_c + h_r).
 func (r *elementRun) sampleRecession(v *[numMC]float64) (rec, bare float64) {
 	e := r.e
-	law := r.chem.law
-	law.K1MolPerM2S *= v[mcRateConst]
+	law := r.chem.film.WithRateFactor(v[mcRateConst])
 	wf := v[mcWallFactor]
 	dAlpha := math.Max(-e.solarAbsorptance, math.Min(1-e.solarAbsorptance, v[mcAbsorptance]))
 	withFinish := e.repellentFrac > 0
