@@ -114,15 +114,19 @@ func (m *FilmModel) Saturation(tempC, filmThicknessM, contactTimeS float64) floa
 	}
 	ceq := m.interp(m.ceq, tempC)
 	d := m.interp(m.diff, tempC)
-	h := filmThicknessM
+	return m.saturation(m.law.k1At(tempC), ceq, d, filmThicknessM, contactTimeS)
+}
+
+// saturation is FilmSaturation's closed form for a surface constant k1
+// (mol/(m²·s)), saturation concentration ceq (mol/m³), diffusion
+// coefficient d (m²/s), film thickness h (m) and contact time t (s).
+func (m *FilmModel) saturation(k1, ceq, d, h, t float64) float64 {
 	n := m.n
-	k1 := m.law.k1At(tempC)
 	kn := k1 * m.knPerK1
 	g := 3 * d * ceq / h
 	hc := h * ceq
 	uSw := m.uSwS * (1 + k1/g)
 
-	t := contactTimeS
 	ua, uaPow, lnUa := m.uSwS, m.uSwSPow, m.lnUSwS
 	if uSw < 1 {
 		lambda := k1 / ((1 + k1/g) * hc)

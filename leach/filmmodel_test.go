@@ -77,3 +77,46 @@ func BenchmarkFilm(b *testing.B) {
 		}
 	})
 }
+
+// TestFilmTableMatchesFilmModel bounds the table's interpolation error
+// against the closed forms on films and contact times of every kind the
+// engine meets (the grid of TestFilmModelMatchesFilmSaturation and
+// off-node points between them).
+func TestFilmTableMatchesFilmModel(t *testing.T) {
+	sol, _ := NewSolubilityTable(0, 100, 0.1, 0)
+	base, err := NewFilmModel(Jeschke2001(sol), 0, 100, 0.1)
+	if err != nil {
+		t.Fatal(err)
+	}
+	tab := base.Table()
+	worst := 0.0
+	for _, kf := range []float64{1, 0.3, 0.1, 1.0 / 30} {
+		m := base.WithRateFactor(kf)
+		for _, tc := range []float64{0.5, 7.3, 15, 25.05, 40, 59.9} {
+			for h := 7e-6; h < 4e-3; h *= 1.37 {
+				for ts := 0.013; ts < 4000; ts *= 1.9 {
+					want := m.Saturation(tc, h, ts)
+					got := tab.Saturation(m.Groups(tc, h, ts))
+					if d := math.Abs(got - want); d > worst {
+						worst = d
+					}
+					if math.Abs(got-want) > 1e-3 {
+						t.Errorf("k×%.3g θ=%g h=%.3g t=%.3g: table %.6f, closed form %.6f", kf, tc, h, ts, got, want)
+					}
+				}
+			}
+		}
+	}
+	t.Logf("largest table error in saturation: %.2g", worst)
+}
+
+func BenchmarkFilmTable(b *testing.B) {
+	sol, _ := NewSolubilityTable(0, 100, 0.1, 0)
+	m, _ := NewFilmModel(Jeschke2001(sol), 0, 100, 0.1)
+	tab := m.Table()
+	hs := []float64{2e-5, 5e-5, 1e-4, 3e-4}
+	ts := []float64{5, 60, 300, 3600}
+	for i := 0; b.Loop(); i++ {
+		sinkFilm = tab.Saturation(m.Groups(12, hs[i%4], ts[(i/4)%4]))
+	}
+}

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"runtime"
+	"sync"
 	"time"
 
 	"github.com/gyprisk/gyprisk/climate"
@@ -165,29 +167,23 @@ func Run(p *Project, opt Options) (*Output, error) {
 			}
 			roomHours[path] = rh
 		}
-		for _, e := range cases {
+		results, runs, err := assessCases(cases, sh, roomHours, chem, sc.ID, samples, seed, th, hw != nil, func(what string) {
+			done++
 			if opt.Progress != nil {
-				opt.Progress(done, total, fmt.Sprintf("%s / %s / %s", e.id, e.variant, sc.ID))
+				opt.Progress(done, total, what)
 			}
-			run, err := assessElement(e, sh, roomHours[e.indoorClimate], chem, hw != nil || samples > 0)
-			if err != nil {
-				return nil, err
-			}
-			res := run.result(sc.ID)
-			if samples > 0 {
-				if err := run.uncertainty(&res, samples, seed, chem); err != nil {
-					return nil, err
-				}
-			}
-			th.rate(&res)
-			res.Findings = findings(&res)
-			out.Elements = append(out.Elements, res)
+		})
+		if err != nil {
+			return nil, err
+		}
+		out.Elements = append(out.Elements, results...)
+		for _, run := range runs {
+			out.Notes = append(out.Notes, run.notes...)
 			if hw != nil {
 				if err := hw.write(run, sc.ID); err != nil {
 					return nil, err
 				}
 			}
-			done++
 		}
 	}
 	if hw != nil {
@@ -199,6 +195,53 @@ func Run(p *Project, opt Options) (*Output, error) {
 		opt.Progress(total, total, "")
 	}
 	return out, nil
+}
+
+// assessCases assesses every case under one scenario, the cases in
+// parallel on all cores (each is independent; results keep the cases'
+// order). done is called, serialised, as each case finishes.
+func assessCases(cases []*element, sh *siteHours, rooms map[string]*siteHours, chem *chemistry, scenario string,
+	samples int, seed uint64, th Thresholds, keepTrace bool, done func(what string)) ([]ElementResult, []*elementRun, error) {
+	results := make([]ElementResult, len(cases))
+	runs := make([]*elementRun, len(cases))
+	errs := make([]error, len(cases))
+	var mu sync.Mutex
+	var wg sync.WaitGroup
+	sem := make(chan struct{}, runtime.GOMAXPROCS(0))
+	for k, e := range cases {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			sem <- struct{}{}
+			defer func() { <-sem }()
+			run, err := assessElement(e, sh, rooms[e.indoorClimate], chem, keepTrace || samples > 0)
+			if err == nil {
+				res := run.result(scenario)
+				if samples > 0 {
+					err = run.uncertainty(&res, samples, seed, chem)
+				}
+				th.rate(&res)
+				res.Findings = findings(&res)
+				results[k] = res
+				run.rate, run.wet = nil, nil // no longer needed; free them early
+				if !keepTrace {
+					run.trace = nil
+				}
+				runs[k] = run
+			}
+			errs[k] = err
+			mu.Lock()
+			done(fmt.Sprintf("%s / %s / %s", e.id, e.variant, scenario))
+			mu.Unlock()
+		}()
+	}
+	wg.Wait()
+	for _, err := range errs {
+		if err != nil {
+			return nil, nil, err
+		}
+	}
+	return results, runs, nil
 }
 
 // needsOutdoor reports whether any element needs the outdoor record.

@@ -8,6 +8,8 @@ import (
 	"sync"
 
 	"gonum.org/v1/gonum/stat"
+
+	"github.com/gyprisk/gyprisk/leach"
 )
 
 // The Monte Carlo inputs. Each is drawn independently for every sample;
@@ -68,13 +70,18 @@ const (
 	mcDensityHalfWidth = 0.15
 )
 
+// rateRange is the sampled span of the rate-constant multiplier, [lo, 1]
+// log-uniform; tests set a symmetric span through it.
+var rateRange = [2]float64{1.0 / mcRateLogRange, 1}
+
 // draw returns sample k's input values. Stream k of the seed is used, so
 // a sample does not depend on how many others run or in which order.
 func draw(seed uint64, k int) [numMC]float64 {
 	rng := rand.New(rand.NewPCG(seed, uint64(k)))
 	var v [numMC]float64
 	v[mcSolubility] = 1 + mcSolubilityHalfWidth*(2*rng.Float64()-1)
-	v[mcRateConst] = math.Exp(-math.Log(mcRateLogRange) * rng.Float64())
+	lo, hi := math.Log(rateRange[0]), math.Log(rateRange[1])
+	v[mcRateConst] = math.Exp(lo + (hi-lo)*rng.Float64())
 	v[mcFilmThick] = math.Exp(math.Log(mcFilmFactor) * (2*rng.Float64() - 1))
 	v[mcContact] = math.Exp(math.Log(mcFilmFactor) * (2*rng.Float64() - 1))
 	v[mcWallFactor] = 1 + mcWallHalfWidth*(rng.Float64()-rng.Float64()) // triangular on [−w, w]
@@ -83,43 +90,110 @@ func draw(seed uint64, k int) [numMC]float64 {
 	return v
 }
 
-// sampleRecession returns the recession (mm/year) of one sample, with the
-// finish working and without it, by re-running the leaching of the wet
-// hours only: everything else (the weather, the sun, the water before the
-// wall factor, the surface temperature) was computed once by the
-// deterministic run. The surface temperature follows the sampled
-// absorptance through its linearisation ∂θ_s/∂α = I/(h_c + h_r).
-func (r *elementRun) sampleRecession(v *[numMC]float64) (rec, bare float64) {
+// mcPlan is everything about an element's wet hours that the samples do
+// not change, computed once: "Precompute everything that does not depend
+// on the sampled inputs". Hours whose film is saturated even at the least
+// favourable corner of the sampled ranges dissolve water × c_eq whatever
+// the sample, so they are summed once, with c_eq linearised in the
+// sampled surface-temperature shift; only the remaining hours are
+// re-evaluated per sample, through the dimensionless film table.
+type mcPlan struct {
+	// Saturated hours, by water part (driven rain, runoff, vertical rain,
+	// condensate): Σ part·c_eq(θ)·w/Δt and Σ part·c_eq'(θ)·∂θ/∂α·w/Δt.
+	sat, satSlope [4]float64
+	hours         []mcHour
+	table         *leach.FilmTable
+}
+
+type mcHour struct {
+	driven, runoff, rain, cond float64 // L/m² (after a repellent)
+	tempC, dTdAlpha            float64
+	delta0, water0             float64 // Nusselt thickness at the deterministic water
+	flowLengthM, dtS, wdt      float64 // wdt = trapezoid weight / Δt
+}
+
+// plan builds the element's mcPlan.
+func (r *elementRun) plan() *mcPlan {
+	pl := &mcPlan{table: r.chem.film.Table()}
 	e := r.e
-	law := r.chem.film.WithRateFactor(v[mcRateConst])
-	wf := v[mcWallFactor]
-	dAlpha := math.Max(-e.solarAbsorptance, math.Min(1-e.solarAbsorptance, v[mcAbsorptance]))
-	withFinish := e.repellentFrac > 0
-	var g, gBare float64
+	unrep := 1.0
+	if e.repellentFrac > 0 {
+		unrep = 1 / (1 - e.repellentFrac)
+	}
+	slowest := r.chem.film.WithRateFactor(rateRange[0])
 	for k := range r.wet {
 		w := &r.wet[k]
-		t := w.tempC + dAlpha*w.dTdAlpha
+		parts := [4]float64{w.drivenL, w.runoffL, w.rainL, w.condL}
+		water := w.drivenL + w.runoffL + w.rainL + w.condL
+		wdt := w.weightS / w.dtS
+		// The wettest and slowest corner of the sampled ranges.
+		wMax := (w.drivenL*unrep+w.runoffL)*(1+mcWallHalfWidth) + w.rainL*unrep + w.condL
+		tMin := w.tempC - mcAbsorptanceHalfWidth*w.dTdAlpha
+		if filmSat(slowest, wMax, tMin, w.slopeDeg, w.flowRunM, w.dtS, mcFilmFactor, 1/mcFilmFactor) >= 1-1e-6 {
+			ceq := r.chem.sol.At(clampChem(w.tempC))
+			slope := (r.chem.sol.At(clampChem(w.tempC+0.05)) - r.chem.sol.At(clampChem(w.tempC-0.05))) / 0.1
+			for j, p := range parts {
+				pl.sat[j] += p * ceq * wdt
+				pl.satSlope[j] += p * slope * w.dTdAlpha * wdt
+			}
+			continue
+		}
+		q := water * 1e-3 * w.flowRunM / w.dtS
+		delta, _ := r.chem.film.Film(q, w.slopeDeg, w.tempC)
+		pl.hours = append(pl.hours, mcHour{driven: w.drivenL, runoff: w.runoffL, rain: w.rainL, cond: w.condL,
+			tempC: w.tempC, dTdAlpha: w.dTdAlpha, delta0: delta, water0: water,
+			flowLengthM: w.flowRunM, dtS: w.dtS, wdt: wdt})
+	}
+	return pl
+}
+
+// sampleRecession returns the recession (mm/year) of one sample, with the
+// finish working and without it. The surface temperature follows the
+// sampled absorptance through its linearisation ∂θ_s/∂α = I/(h_c + h_r);
+// the film's Nusselt thickness scales with the sampled water as q^(1/3) at
+// the deterministic temperature.
+func (r *elementRun) sampleRecession(pl *mcPlan, v *[numMC]float64) (rec, bare float64) {
+	e := r.e
+	film := r.chem.film.WithRateFactor(v[mcRateConst])
+	wf, sol := v[mcWallFactor], v[mcSolubility]
+	dAlpha := math.Max(-e.solarAbsorptance, math.Min(1-e.solarAbsorptance, v[mcAbsorptance]))
+	unrep := 1.0
+	if e.repellentFrac > 0 {
+		unrep = 1 / (1 - e.repellentFrac)
+	}
+	// Saturated hours: linear in the sampled factors.
+	part := func(j int) float64 { return pl.sat[j] + dAlpha*pl.satSlope[j] }
+	g := sol * ((part(0)+part(1))*wf + part(2) + part(3))
+	gBare := sol * ((part(0)*unrep+part(1))*wf + part(2)*unrep + part(3))
+	for k := range pl.hours {
+		h := &pl.hours[k]
+		t := h.tempC + dAlpha*h.dTdAlpha
 		if t <= 0 {
 			continue
 		}
-		ceq := r.chem.sol.At(clampChem(t)) * v[mcSolubility]
-		water := (w.drivenL+w.runoffL)*wf + w.rainL + w.condL
-		sat := filmSat(law, water, t, w.slopeDeg, w.flowRunM, w.dtS, v[mcFilmThick], v[mcContact])
-		g += water * ceq * sat * w.weightS / w.dtS
-		if withFinish {
-			unrep := 1 / (1 - e.repellentFrac)
-			waterBare := (w.drivenL*unrep+w.runoffL)*wf + w.rainL*unrep + w.condL
-			satB := filmSat(law, waterBare, t, w.slopeDeg, w.flowRunM, w.dtS, v[mcFilmThick], v[mcContact])
-			gBare += waterBare * ceq * satB * w.weightS / w.dtS
+		ceq := r.chem.sol.At(clampChem(t)) * sol
+		water := (h.driven+h.runoff)*wf + h.rain + h.cond
+		g += water * ceq * pl.sampleSat(film, h, water, t, v) * h.wdt
+		if unrep != 1 {
+			wb := (h.driven*unrep+h.runoff)*wf + h.rain*unrep + h.cond
+			gBare += wb * ceq * pl.sampleSat(film, h, wb, t, v) * h.wdt
 		}
 	}
 	mmPerG := 1 / (e.bulkDensityKgM3 * v[mcDensity] * e.gypsumFrac)
 	rec = g / r.years * mmPerG
 	bare = rec
-	if withFinish {
+	if unrep != 1 {
 		bare = gBare / r.years * mmPerG
 	}
 	return rec, bare
+}
+
+// sampleSat is the film saturation of one hour in one sample.
+func (pl *mcPlan) sampleSat(film *leach.FilmModel, h *mcHour, water, tempC float64, v *[numMC]float64) float64 {
+	nusselt := h.delta0 * math.Cbrt(water/h.water0)
+	q := water * 1e-3 * h.flowLengthM / h.dtS
+	contact := math.Min(h.flowLengthM*nusselt/q*v[mcContact], h.dtS)
+	return pl.table.Saturation(film.Groups(clampChem(tempC), nusselt*v[mcFilmThick], contact))
 }
 
 // uncertainty runs the samples for one result and fills its bands and
@@ -129,6 +203,7 @@ func (r *elementRun) uncertainty(res *ElementResult, samples int, seed uint64, _
 	inputs := make([][numMC]float64, samples)
 	recs := make([]float64, samples)
 	years := make([]float64, samples)
+	pl := r.plan()
 	workers := min(runtime.GOMAXPROCS(0), samples)
 	var wg sync.WaitGroup
 	next := make(chan int, samples)
@@ -142,7 +217,7 @@ func (r *elementRun) uncertainty(res *ElementResult, samples int, seed uint64, _
 			defer wg.Done()
 			for k := range next {
 				inputs[k] = draw(seed, k)
-				rec, bare := r.sampleRecession(&inputs[k])
+				rec, bare := r.sampleRecession(pl, &inputs[k])
 				recs[k] = rec
 				if y := yearsToLimit(r.e, rec, bare); y != nil {
 					years[k] = *y
