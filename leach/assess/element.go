@@ -17,12 +17,14 @@ type element struct {
 	wallFactor                   float64
 	wallPosition                 string
 	runoffHeightM, flowLengthM   float64
+	runoffFrac                   float64 // share of the driving rain on the wall above that runs down
 	solarAbsorptance             float64
 	thicknessMM, lossLimitMM     float64
 	bulkDensityKgM3, gypsumFrac  float64
 	porosity                     float64
 	mouldClass                   string
 	repellentFrac, repellentLife float64
+	wallUValue                   float64 // W/(m²·K); 0: adiabatic behind
 
 	indoorClimate     string
 	temperatureFactor float64 // 0: not given
@@ -86,6 +88,7 @@ func resolve(base *ElementSpec, v *ElementSpec) (*element, error) {
 	e.heightM = get(spec.HeightM, 0)
 	e.obstructionM = get(spec.ObstructionM, -1)
 	e.runoffHeightM = get(spec.RunoffHeightM, 0)
+	e.runoffFrac = get(spec.RunoffFraction, 1)
 	e.flowLengthM = get(spec.FlowLengthM, defaultFlowLengthM)
 	e.solarAbsorptance = get(spec.SolarAbsorptance, mat.SolarAbsorptance)
 	e.bulkDensityKgM3 = get(spec.BulkDensityKgM3, mat.BulkDensityKgM3)
@@ -135,6 +138,11 @@ func resolve(base *ElementSpec, v *ElementSpec) (*element, error) {
 		}
 		if e.obstructionM < 0 {
 			e.note("obstruction_m not given: no obstruction within 120 m upwind assumed (obstruction factor 1)")
+		}
+		e.wallUValue = get(spec.WallUValue, 0)
+		e.indoorTempC = get(spec.IndoorTempC, defaultIndoorTempC)
+		if e.wallUValue > 0 && spec.IndoorTempC == nil {
+			e.note(fmt.Sprintf("indoor_temp_c not given: the room behind the wall taken at %g °C", float64(defaultIndoorTempC)))
 		}
 	} else {
 		e.indoorClimate = spec.IndoorClimate
@@ -193,11 +201,11 @@ func mergeSpec(base, v ElementSpec) ElementSpec {
 		src *float64
 	}{
 		{&out.AzimuthDeg, v.AzimuthDeg}, {&out.TiltDeg, v.TiltDeg}, {&out.HeightM, v.HeightM},
-		{&out.ObstructionM, v.ObstructionM}, {&out.WallFactor, v.WallFactor}, {&out.RunoffHeightM, v.RunoffHeightM},
+		{&out.ObstructionM, v.ObstructionM}, {&out.WallFactor, v.WallFactor}, {&out.RunoffHeightM, v.RunoffHeightM}, {&out.RunoffFraction, v.RunoffFraction},
 		{&out.FlowLengthM, v.FlowLengthM}, {&out.SolarAbsorptance, v.SolarAbsorptance}, {&out.ThicknessMM, v.ThicknessMM},
 		{&out.LossLimitMM, v.LossLimitMM}, {&out.BulkDensityKgM3, v.BulkDensityKgM3}, {&out.GypsumFraction, v.GypsumFraction},
 		{&out.Porosity, v.Porosity}, {&out.RepellentFraction, v.RepellentFraction}, {&out.RepellentLifeYears, v.RepellentLifeYears},
-		{&out.TemperatureFactor, v.TemperatureFactor}, {&out.IndoorTempC, v.IndoorTempC}, {&out.IndoorRHPct, v.IndoorRHPct},
+		{&out.TemperatureFactor, v.TemperatureFactor}, {&out.WallUValue, v.WallUValue}, {&out.IndoorTempC, v.IndoorTempC}, {&out.IndoorRHPct, v.IndoorRHPct},
 	} {
 		f(p.dst, p.src)
 	}

@@ -297,6 +297,7 @@ func (p *Project) thresholds() (Thresholds, error) {
 	}{
 		{&t.LeachingModerateYears, s.LeachingModerateYears}, {&t.LeachingHighYears, s.LeachingHighYears},
 		{&t.DehydrationModerateHours, s.DehydrationModerateHours}, {&t.DehydrationHighHours, s.DehydrationHighHours},
+		{&t.HotModerateHours, s.HotModerateHours}, {&t.HotHighHours, s.HotHighHours},
 		{&t.CondensationModerateHours, s.CondensationModerateHours}, {&t.CondensationHighHours, s.CondensationHighHours},
 		{&t.MouldModerateIndex, s.MouldModerateIndex}, {&t.MouldHighIndex, s.MouldHighIndex},
 	} {

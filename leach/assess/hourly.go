@@ -74,16 +74,16 @@ type elementRun struct {
 	dissolvedG, boundG                float64
 	satWeighted, satWater             float64
 
-	iso13788 climate.MonthlyRH // the ISO 13788 monthly mean surface RH criterion
-	monthly  []ElementMonth
-	rhSum    []float64 // per month, time-weighted sum of surface RH
-	tSum     []float64
-	mHours   []float64
-	daily    []ElementDay
-	dSums    [][3]float64 // per day: Σ θ·dt, Σ φ·dt, Σ dt
+	monthly       []ElementMonth
+	failingMonths []string  // months failing the ISO 13788 criterion
+	rhSum         []float64 // per month, time-weighted sums of surface RH,
+	tSum          []float64 // surface temperature
+	pSum          []float64 // and vapour pressure at the surface
+	mHours        []float64
+	daily         []ElementDay
+	dSums         [][3]float64 // per day: Σ θ·dt, Σ φ·dt, Σ dt
 
 	// per-hour trace (kept for --hourly and the samples)
-	err   error    // the first error met in the loop
 	notes []string // what the run had to assume
 	trace *trace
 	wet   []wetHour
@@ -116,6 +116,7 @@ func assessElement(e *element, outdoor, room *siteHours, chem *chemistry, keep b
 	}
 	r.rhSum = make([]float64, len(axis.months))
 	r.tSum = make([]float64, len(axis.months))
+	r.pSum = make([]float64, len(axis.months))
 	r.mHours = make([]float64, len(axis.months))
 	r.daily = make([]ElementDay, len(axis.days))
 	r.dSums = make([][3]float64, len(axis.days))
@@ -145,10 +146,16 @@ func assessElement(e *element, outdoor, room *siteHours, chem *chemistry, keep b
 		}
 		plane := solar.NewPlane(e.tiltDeg, e.azimuthDeg)
 		surf := surface.NewSurface(e.tiltDeg, e.solarAbsorptance, surfaceEmissivity)
+		surf.UWPerM2K = surfaceConductance(e.wallUValue)
 		sinAz, cosAz := math.Sincos(e.azimuthDeg * math.Pi / 180)
 		sinT, cosT := math.Sincos(e.tiltDeg * math.Pi / 180)
+		// sin 180° and cos 90° are 10⁻¹⁶, not 0: snap them, so a soffit
+		// gets no driving rain and a wall no vertical rain.
 		if math.Abs(cosT) < 1e-12 {
 			cosT = 0
+		}
+		if math.Abs(sinT) < 1e-12 {
+			sinT = 0
 		}
 		exposure := r.cR * axis.site.topography * r.obstruction * e.wallFactor
 		exposureAbove := r.cRAbove * axis.site.topography * r.obstruction * e.wallFactor
@@ -165,20 +172,17 @@ func assessElement(e *element, outdoor, room *siteHours, chem *chemistry, keep b
 			h.deposit = dr*exposure*sinT + h.depositRain
 			h.runoff = 0
 			if e.runoffHeightM > 0 {
-				h.runoff = dr * exposureAbove * e.runoffHeightM / e.flowLengthM
+				h.runoff = dr * exposureAbove * e.runoffFrac * e.runoffHeightM / e.flowLengthM
 			}
 			// Surface state.
 			irr := axis.sky[i].OnPlane(&plane, axis.site.groundAlbedo)
 			hc := surface.ConvectiveCoefficient(axis.windMS[i])
 			cond := surface.Conditions{AirTempC: axis.tempC[i], VapourPa: axis.vapPa[i], HcWPerM2K: hc,
-				SkyTempC: axis.skyTempC[i], IrradianceWM2: irr.TotalWM2, Wet: h.deposit+h.runoff > 0}
+				SkyTempC: axis.skyTempC[i], IrradianceWM2: irr.TotalWM2, InnerTempC: e.indoorTempC, Wet: h.deposit+h.runoff > 0}
 			st := surf.Solve(&cond)
 			h.tempC = st.TempC
 			h.dTdAlpha = irr.TotalWM2 / (hc + surface.RadiativeCoefficient(surfaceEmissivity, st.TempC))
-			h.condKg = 0
-			if st.VapourFluxKgPerM2S > 0 {
-				h.condKg = st.VapourFluxKgPerM2S * axis.dtS[i]
-			}
+			h.condKg = condensate(st.VapourFluxKgPerM2S, axis.dtS[i])
 			h.vapPa = axis.vapPa[i]
 			h.rhPct = climate.RHAtPct(h.vapPa, h.tempC)
 			h.slopeDeg = flowSlope(e.tiltDeg)
@@ -205,6 +209,38 @@ type hourState struct {
 	lastWetS        float64
 	frozenWet       bool
 	started         bool
+}
+
+// condensate is the water condensed in an interval of dtS seconds at a
+// vapour flux (kg/(m²·s), positive condensing), with fluxes below
+// 10⁻¹² kg/(m²·s) (a micrometre of water in thirty years) counted as none:
+// they are the round-off of a surface at its dew point.
+func condensate(fluxKgPerM2S, dtS float64) float64 {
+	if fluxKgPerM2S < 1e-12 {
+		return 0
+	}
+	return fluxKgPerM2S * dtS
+}
+
+// lnWaterActivity returns ln(φ/100), with φ floored at 10⁻⁴ % so that a
+// bone-dry hour gives a large negative number, not −Inf.
+func lnWaterActivity(rhPct float64) float64 {
+	return math.Log(math.Max(rhPct, 1e-4) / 100)
+}
+
+// surfaceConductance is the conductance (W/(m²·K)) from the exterior
+// surface through the wall to the room air, from the wall's thermal
+// transmittance U with the exterior surface resistance taken out,
+//
+//	Λ = 1 / (1/U − R_se),   R_se = 0.04 m²·K/W
+//
+// (ISO 6946:2017: U = 1/R_T with R_T including R_se; from memory). U = 0
+// gives 0 (adiabatic).
+func surfaceConductance(uWPerM2K float64) float64 {
+	if uWPerM2K <= 0 {
+		return 0
+	}
+	return 1 / (1/uWPerM2K - surface.ExteriorResistanceISO6946)
 }
 
 // flowSlope is the slope (degrees from horizontal) water runs down on a
@@ -250,7 +286,8 @@ func (r *elementRun) step(i int, h *hourState, mm *mould.Model) {
 	rh := h.rhPct
 	rhc := math.Min(rh, 100)
 
-	contact := h.deposit*(1-e.repellentFrac) + h.runoff
+	keep := 1 - e.repellentFrac // a water-repellent finish sheds the rest without dissolving contact
+	contact := (h.deposit + h.runoff) * keep
 	condL := h.condKg // 1 kg of water is 1 L
 	water := contact + condL
 	var dissolved float64
@@ -262,9 +299,8 @@ func (r *elementRun) step(i int, h *hourState, mm *mould.Model) {
 		r.boundG += water * ceq * sh.wTrap[i] / dt
 		r.satWeighted += sat * water
 		r.satWater += water
-		keep := 1 - e.repellentFrac
 		r.wet = append(r.wet, wetHour{i: int32(i), drivenL: (h.deposit - h.depositRain) * keep, rainL: h.depositRain * keep,
-			runoffL: h.runoff, condL: condL,
+			runoffL: h.runoff * keep, condL: condL,
 			tempC: t, dTdAlpha: h.dTdAlpha, flowRunM: e.flowLengthM, slopeDeg: h.slopeDeg, dtS: dt, weightS: sh.wTrap[i]})
 	}
 	r.rate[i] = dissolved / dt
@@ -272,12 +308,15 @@ func (r *elementRun) step(i int, h *hourState, mm *mould.Model) {
 	r.runoffL += h.runoff
 	r.condensateKg += h.condKg
 
-	// Dehydration (bassanite route; anhydrite reported as kinetically hindered).
-	dgB := deltaG(chem.lnAwEqBas, 1.5, t, rhc)
+	// Dehydration (bassanite route; anhydrite reported as kinetically
+	// hindered): ΔG = ν·R·T·(ln a_w − ln a_w,eq), so the sign needs no
+	// more than the one logarithm.
+	lnAw := lnWaterActivity(rhc)
+	dgB := 1.5 * leach.GasConstantJPerMolK * (t + leach.KelvinOffset) * (lnAw - lnAwEq(chem.lnAwEqBas, t))
 	if dgB < 0 {
 		r.unstableS += dt
 	}
-	if deltaG(chem.lnAwEqAnh, 2, t, rhc) < 0 {
+	if lnAw < lnAwEq(chem.lnAwEqAnh, t) {
 		r.anhydriteS += dt
 	}
 	if t > hotLimitC {
@@ -289,8 +328,10 @@ func (r *elementRun) step(i int, h *hourState, mm *mould.Model) {
 	if !h.started || dgB < r.minDeltaG {
 		r.minDeltaG = dgB
 	}
-	// Condensation: the surface at or below the dew point of the air.
-	if rh >= 100 || h.condKg > 0 {
+	// Condensation: the surface below the dew point of the air, so that
+	// water condenses on it (a surface merely at the dew point of
+	// saturated air, in fog, is not counted).
+	if h.condKg > 0 || rh > 100.01 {
 		r.condS += dt
 	}
 	// Wetness and wet freeze–thaw.
@@ -315,9 +356,7 @@ func (r *elementRun) step(i int, h *hourState, mm *mould.Model) {
 		r.mouldMax = mi
 	}
 	// Calendar.
-	if err := r.iso13788.Add(sh.time(i), hours, t, h.vapPa); err != nil {
-		r.err = err
-	}
+	r.pSum[sh.month[i]] += h.vapPa * hours
 	m := &r.monthly[sh.month[i]]
 	m.DepositedLM2 += h.deposit
 	m.RunoffInLM2 += h.runoff
@@ -389,10 +428,18 @@ func (r *elementRun) finish(mm *mould.Model) error {
 		r.monthly[r.sh.month[i]].DissolvedGM2 += g
 		r.daily[r.sh.day[i]].CumLossMM = cum * mmPerG
 	}
+	r.failingMonths = []string{}
 	for k := range r.monthly {
 		if h := r.mHours[k]; h > 0 {
-			r.monthly[k].SurfaceTempMeanC = r.tSum[k] / h
-			r.monthly[k].SurfaceRHMeanPct = r.rhSum[k] / h
+			m := &r.monthly[k]
+			m.SurfaceTempMeanC = r.tSum[k] / h
+			m.SurfaceRHMeanPct = r.rhSum[k] / h
+			// ISO 13788:2012 criterion: the monthly surface RH formed from
+			// the monthly means, 100·p̄/p_sat(θ̄_si), at most 80 %.
+			m.SurfaceRHISO13788Pct = climate.RHAtPct(r.pSum[k]/h, m.SurfaceTempMeanC)
+			if m.SurfaceRHISO13788Pct > climate.MouldCriterionRHPct {
+				r.failingMonths = append(r.failingMonths, m.Month)
+			}
 		}
 	}
 	for k := range r.daily {

@@ -69,10 +69,7 @@ func (r *elementRun) interiorHours(outdoor, room *siteHours, mm *mould.Model, h 
 		h.deposit, h.runoff = 0, 0
 		h.tempC, h.vapPa = ts, pi
 		h.rhPct = climate.RHAtPct(pi, ts)
-		h.condKg = 0
-		if g := surface.CondensationRateKgPerM2S(interiorHcWPerM2K, ti, pi, ts); g > 0 {
-			h.condKg = g * sh.dtS[i]
-		}
+		h.condKg = condensate(surface.CondensationRateKgPerM2S(interiorHcWPerM2K, ti, pi, ts), sh.dtS[i])
 		h.dTdAlpha = 0
 		h.slopeDeg = flowSlope(e.tiltDeg)
 		if math.IsNaN(h.tempC) || math.IsNaN(h.rhPct) {

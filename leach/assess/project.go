@@ -69,10 +69,17 @@ type ElementSpec struct {
 	WallFactor       *float64 `toml:"wall_factor"`
 	WallPosition     string   `toml:"wall_position"`
 	RunoffHeightM    *float64 `toml:"runoff_height_m"`
+	RunoffFraction   *float64 `toml:"runoff_fraction"`
 	FlowLengthM      *float64 `toml:"flow_length_m"`
 	SolarAbsorptance *float64 `toml:"solar_absorptance"`
 	ThicknessMM      *float64 `toml:"thickness_mm"`
 	LossLimitMM      *float64 `toml:"loss_limit_mm"`
+
+	// Exterior elements on a heated wall: the wall's thermal
+	// transmittance U (ISO 6946) and the room temperature behind it warm
+	// the surface on cold nights. 0 (the default) treats the surface as
+	// adiabatic behind.
+	WallUValue *float64 `toml:"wall_u_value_w_m2k"`
 
 	// Material property overrides.
 	BulkDensityKgM3 *float64 `toml:"bulk_density_kg_m3"`
@@ -80,9 +87,9 @@ type ElementSpec struct {
 	Porosity        *float64 `toml:"porosity"`
 	MouldClass      string   `toml:"mould_class"`
 
-	// Water-repellent finish: the fraction of deposited water that runs
-	// off without dissolving contact while the finish works, and the years
-	// it keeps working.
+	// Water-repellent finish: the fraction of the rain water on the
+	// element (deposited and run-off) that runs off without dissolving
+	// contact while the finish works, and the years it keeps working.
 	RepellentFraction  *float64 `toml:"repellent_fraction"`
 	RepellentLifeYears *float64 `toml:"repellent_life_years"`
 
@@ -104,6 +111,8 @@ type ThresholdSpec struct {
 	LeachingHighYears         *float64 `toml:"leaching_high_years"`
 	DehydrationModerateHours  *float64 `toml:"dehydration_moderate_hours"`
 	DehydrationHighHours      *float64 `toml:"dehydration_high_hours"`
+	HotModerateHours          *float64 `toml:"hot_moderate_hours"`
+	HotHighHours              *float64 `toml:"hot_high_hours"`
 	CondensationModerateHours *float64 `toml:"condensation_moderate_hours"`
 	CondensationHighHours     *float64 `toml:"condensation_high_hours"`
 	MouldModerateIndex        *float64 `toml:"mould_moderate_index"`
@@ -334,6 +343,7 @@ func (e *ElementSpec) checkValues(bad func(key, format string, a ...any) error, 
 		{"obstruction_m", e.ObstructionM, 0, 10000},
 		{"wall_factor", e.WallFactor, 0, 2},
 		{"runoff_height_m", e.RunoffHeightM, 0, 300},
+		{"runoff_fraction", e.RunoffFraction, 0, 1},
 		{"flow_length_m", e.FlowLengthM, 0.01, 50},
 		{"solar_absorptance", e.SolarAbsorptance, 0, 1},
 		{"thickness_mm", e.ThicknessMM, 0.1, 1000},
@@ -344,6 +354,7 @@ func (e *ElementSpec) checkValues(bad func(key, format string, a ...any) error, 
 		{"repellent_fraction", e.RepellentFraction, 0, 0.99},
 		{"repellent_life_years", e.RepellentLifeYears, 0, 200},
 		{"temperature_factor", e.TemperatureFactor, 0, 1},
+		{"wall_u_value_w_m2k", e.WallUValue, 0, 10},
 		{"indoor_temp_c", e.IndoorTempC, -10, 40},
 		{"indoor_rh_pct", e.IndoorRHPct, 0, 100},
 	}

@@ -139,6 +139,7 @@ type ElementInputs struct {
 	ObstructionFactor  float64 `json:"obstruction_factor"`
 	RunoffHeightM      float64 `json:"runoff_height_m"`
 	FlowLengthM        float64 `json:"flow_length_m"`
+	RunoffFraction     float64 `json:"runoff_fraction"`
 	SolarAbsorptance   float64 `json:"solar_absorptance"`
 	ThicknessMM        float64 `json:"thickness_mm"`
 	LossLimitMM        float64 `json:"loss_limit_mm"`
@@ -148,6 +149,7 @@ type ElementInputs struct {
 	MouldClass         string  `json:"mould_class"`
 	RepellentFraction  float64 `json:"repellent_fraction"`
 	RepellentLifeYears float64 `json:"repellent_life_years"`
+	WallUValueWPerM2K  float64 `json:"wall_u_value_w_m2k"`
 	TemperatureFactor  float64 `json:"temperature_factor,omitempty"`
 	HumidityClass      int     `json:"humidity_class,omitempty"`
 	IndoorClimate      string  `json:"indoor_climate,omitempty"`
@@ -233,7 +235,10 @@ type ElementMonth struct {
 	SurfaceTempMeanC float64 `json:"surface_temp_mean_c"`
 	SurfaceTempMaxC  float64 `json:"surface_temp_max_c"`
 	SurfaceRHMeanPct float64 `json:"surface_rh_mean_pct"`
-	MouldIndexMax    float64 `json:"mould_index_max"`
+	// SurfaceRHISO13788Pct is the month's surface RH as ISO 13788 forms
+	// it, from the monthly mean vapour pressure and surface temperature.
+	SurfaceRHISO13788Pct float64 `json:"surface_rh_iso13788_pct"`
+	MouldIndexMax        float64 `json:"mould_index_max"`
 }
 
 // ElementDay is one day of an element's trace (for charts).

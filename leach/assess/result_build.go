@@ -16,10 +16,11 @@ func (r *elementRun) result(scenario string) ElementResult {
 		Inputs: ElementInputs{
 			AzimuthDeg: e.azimuthDeg, TiltDeg: e.tiltDeg, HeightM: e.heightM, ObstructionM: math.Max(e.obstructionM, 0),
 			WallFactor: e.wallFactor, RoughnessCoeff: r.cR, TopographyFactor: r.topography(), ObstructionFactor: r.obstruction,
-			RunoffHeightM: e.runoffHeightM, FlowLengthM: e.flowLengthM, SolarAbsorptance: e.solarAbsorptance,
+			RunoffHeightM: e.runoffHeightM, FlowLengthM: e.flowLengthM, RunoffFraction: e.runoffFrac, SolarAbsorptance: e.solarAbsorptance,
 			ThicknessMM: e.thicknessMM, LossLimitMM: e.lossLimitMM,
 			BulkDensityKgM3: e.bulkDensityKgM3, GypsumFraction: e.gypsumFrac, Porosity: e.porosity,
 			MouldClass: e.mouldClass, RepellentFraction: e.repellentFrac, RepellentLifeYears: e.repellentLife,
+			WallUValueWPerM2K: e.wallUValue,
 			TemperatureFactor: e.temperatureFactor, HumidityClass: e.humidityClass, IndoorClimate: e.indoorClimate,
 		},
 		Water: WaterOut{
@@ -42,10 +43,7 @@ func (r *elementRun) result(scenario string) ElementResult {
 		Mould: MouldOut{IndexMax: r.mouldMax, Class: e.mouldClass},
 		Frost: FrostOut{WetFreezeThawCyclesPerYear: float64(r.freezeThaw) / y},
 	}
-	res.Mould.MonthsOver80PctList = r.iso13788.Failing()
-	if res.Mould.MonthsOver80PctList == nil {
-		res.Mould.MonthsOver80PctList = []string{}
-	}
+	res.Mould.MonthsOver80PctList = r.failingMonths
 	res.Mould.MonthsOver80Pct = len(res.Mould.MonthsOver80PctList)
 
 	rec := perYear(r.dissolvedG) * r.mmPerGram()
@@ -72,8 +70,9 @@ func (r *elementRun) topography() float64 {
 }
 
 // bareRecession is the recession rate once a water-repellent finish has
-// stopped working: the deposited water then dissolves in full. It scales
-// the deposited share of the dissolved mass back up by 1/(1 − f).
+// stopped working: the rain water (deposited and run-off) then dissolves
+// in full. It scales the rain water's share of the dissolved mass back up
+// by 1/(1 − f).
 func (r *elementRun) bareRecession(rec float64) float64 {
 	f := r.e.repellentFrac
 	if f <= 0 || r.dissolvedG == 0 {
@@ -82,7 +81,7 @@ func (r *elementRun) bareRecession(rec float64) float64 {
 	var dep, all float64
 	for _, w := range r.wet {
 		all += w.drivenL + w.rainL + w.runoffL + w.condL
-		dep += w.drivenL + w.rainL
+		dep += w.drivenL + w.rainL + w.runoffL
 	}
 	if all == 0 {
 		return rec

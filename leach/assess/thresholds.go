@@ -16,15 +16,19 @@ type Thresholds struct {
 	LeachingHighYears     float64 `toml:"leaching_high_years" json:"leaching_high_years"`
 
 	// Dehydration, as hours per year with gypsum unstable against
-	// bassanite at the surface. Defaults 1 and 50 h/year: any sustained
-	// instability is worth noting; tens of hours a year are where
-	// powdering of exposed gypsum surfaces is plausible (common practice,
-	// no source).
+	// bassanite at the surface (ΔG < 0). The conversion is slow at
+	// ordinary service temperatures, so only long exposure counts:
+	// defaults 100 and 1000 h/year (common practice, no source).
 	DehydrationModerateHours float64 `toml:"dehydration_moderate_hours" json:"dehydration_moderate_hours"`
 	DehydrationHighHours     float64 `toml:"dehydration_high_hours" json:"dehydration_high_hours"`
+	// Heat, as hours per year with the surface above the 52 °C long-term
+	// limit for gypsum products; the dehydration rating is the worse of
+	// the two. Defaults 1 and 50 h/year (common practice, no source).
+	HotModerateHours float64 `toml:"hot_moderate_hours" json:"hot_moderate_hours"`
+	HotHighHours     float64 `toml:"hot_high_hours" json:"hot_high_hours"`
 
 	// Condensation, as hours per year with the surface at or below the dew
-	// point. Defaults 100 and 500 h/year (common practice, no source).
+	// point. Defaults 200 and 1000 h/year (common practice, no source).
 	CondensationModerateHours float64 `toml:"condensation_moderate_hours" json:"condensation_moderate_hours"`
 	CondensationHighHours     float64 `toml:"condensation_high_hours" json:"condensation_high_hours"`
 
@@ -40,10 +44,12 @@ func DefaultThresholds() Thresholds {
 	return Thresholds{
 		LeachingModerateYears:     60,
 		LeachingHighYears:         20,
-		DehydrationModerateHours:  1,
-		DehydrationHighHours:      50,
-		CondensationModerateHours: 100,
-		CondensationHighHours:     500,
+		DehydrationModerateHours:  100,
+		DehydrationHighHours:      1000,
+		HotModerateHours:          1,
+		HotHighHours:              50,
+		CondensationModerateHours: 200,
+		CondensationHighHours:     1000,
 		MouldModerateIndex:        1,
 		MouldHighIndex:            3,
 	}
@@ -64,6 +70,8 @@ func (t Thresholds) check() error {
 		return fmt.Errorf("thresholds: need 0 < leaching_high_years (%g) < leaching_moderate_years (%g)", t.LeachingHighYears, t.LeachingModerateYears)
 	case !(t.DehydrationModerateHours >= 0 && t.DehydrationModerateHours < t.DehydrationHighHours):
 		return fmt.Errorf("thresholds: need 0 ≤ dehydration_moderate_hours (%g) < dehydration_high_hours (%g)", t.DehydrationModerateHours, t.DehydrationHighHours)
+	case !(t.HotModerateHours >= 0 && t.HotModerateHours < t.HotHighHours):
+		return fmt.Errorf("thresholds: need 0 ≤ hot_moderate_hours (%g) < hot_high_hours (%g)", t.HotModerateHours, t.HotHighHours)
 	case !(t.CondensationModerateHours >= 0 && t.CondensationModerateHours < t.CondensationHighHours):
 		return fmt.Errorf("thresholds: need 0 ≤ condensation_moderate_hours (%g) < condensation_high_hours (%g)", t.CondensationModerateHours, t.CondensationHighHours)
 	case !(t.MouldModerateIndex >= 0 && t.MouldModerateIndex < t.MouldHighIndex && t.MouldHighIndex <= 6):
@@ -94,7 +102,24 @@ func (t Thresholds) rate(r *ElementResult) {
 			r.Ratings.Leaching = Moderate
 		}
 	}
-	r.Ratings.Dehydration = rateUp(r.Dehydration.UnstableHoursPerYear, t.DehydrationModerateHours, t.DehydrationHighHours)
+	r.Ratings.Dehydration = worse(
+		rateUp(r.Dehydration.UnstableHoursPerYear, t.DehydrationModerateHours, t.DehydrationHighHours),
+		rateUp(r.Dehydration.HoursAbove52CPerYear, t.HotModerateHours, t.HotHighHours))
 	r.Ratings.Condensation = rateUp(r.Condensation.HoursPerYear, t.CondensationModerateHours, t.CondensationHighHours)
 	r.Ratings.Mould = rateUp(r.Mould.IndexMax, t.MouldModerateIndex, t.MouldHighIndex)
+}
+
+var ratingOrder = map[string]int{Low: 0, Moderate: 1, High: 2}
+
+// worse returns the worse of two ratings.
+func worse(a, b string) string {
+	if ratingOrder[b] > ratingOrder[a] {
+		return b
+	}
+	return a
+}
+
+// Worst returns the worst of a result's four ratings.
+func (r Ratings) Worst() string {
+	return worse(worse(r.Leaching, r.Dehydration), worse(r.Condensation, r.Mould))
 }

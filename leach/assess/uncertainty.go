@@ -127,7 +127,7 @@ func (r *elementRun) plan() *mcPlan {
 		water := w.drivenL + w.runoffL + w.rainL + w.condL
 		wdt := w.weightS / w.dtS
 		// The wettest and slowest corner of the sampled ranges.
-		wMax := (w.drivenL*unrep+w.runoffL)*(1+mcWallHalfWidth) + w.rainL*unrep + w.condL
+		wMax := (w.drivenL+w.runoffL)*unrep*(1+mcWallHalfWidth) + w.rainL*unrep + w.condL
 		tMin := w.tempC - mcAbsorptanceHalfWidth*w.dTdAlpha
 		if filmSat(slowest, wMax, tMin, w.slopeDeg, w.flowRunM, w.dtS, mcFilmFactor, 1/mcFilmFactor) >= 1-1e-6 {
 			ceq := r.chem.sol.At(clampChem(w.tempC))
@@ -164,7 +164,7 @@ func (r *elementRun) sampleRecession(pl *mcPlan, v *[numMC]float64) (rec, bare f
 	// Saturated hours: linear in the sampled factors.
 	part := func(j int) float64 { return pl.sat[j] + dAlpha*pl.satSlope[j] }
 	g := sol * ((part(0)+part(1))*wf + part(2) + part(3))
-	gBare := sol * ((part(0)*unrep+part(1))*wf + part(2)*unrep + part(3))
+	gBare := sol * ((part(0)+part(1))*unrep*wf + part(2)*unrep + part(3))
 	for k := range pl.hours {
 		h := &pl.hours[k]
 		t := h.tempC + dAlpha*h.dTdAlpha
@@ -175,7 +175,7 @@ func (r *elementRun) sampleRecession(pl *mcPlan, v *[numMC]float64) (rec, bare f
 		water := (h.driven+h.runoff)*wf + h.rain + h.cond
 		g += water * ceq * pl.sampleSat(film, h, water, t, v) * h.wdt
 		if unrep != 1 {
-			wb := (h.driven*unrep+h.runoff)*wf + h.rain*unrep + h.cond
+			wb := (h.driven+h.runoff)*unrep*wf + h.rain*unrep + h.cond
 			gBare += wb * ceq * pl.sampleSat(film, h, wb, t, v) * h.wdt
 		}
 	}
