@@ -38,7 +38,7 @@ func Run(p *Project, opt Options) (*Output, error) {
 		Tool:     Tool{Name: "gyprisk", Version: opt.ToolVersion},
 		RunDate:  opt.Now.UTC().Format(time.RFC3339),
 		Project:  displayPath(p, filepath_base(p.Path)),
-		Database: leach.DatabaseName + " " + leach.DatabaseVersion,
+		Database: leach.Database(),
 		Invented: p.Invented,
 	}
 	if opt.Now.IsZero() {

@@ -244,9 +244,6 @@ func (p *Project) check(data []byte) error {
 		return &ProjectError{File: p.Path, Line: keyLine(data, k), Key: key, Err: fmt.Errorf(format, a...)}
 	}
 	s := &p.Site
-	if s.Climate == "" {
-		return bad("site.climate", "missing: the outdoor climate record is required")
-	}
 	if s.LatitudeDeg == nil || s.LongitudeDeg == nil {
 		return bad("site.latitude_deg", "missing: latitude_deg and longitude_deg are required (they place the sun)")
 	}
