@@ -21,9 +21,12 @@ const (
 	// water on it does (the definition; common practice, no source).
 	wetRHPct = 95
 	// hotLimitC is the long-term service temperature limit commonly set
-	// for gypsum products: 125 °F (52 °C), e.g. the International
-	// Mechanical Code 2021, section 603.5.1, for gypsum board ducts
-	// ("temperature of the air ... shall not exceed 125°F", from memory).
+	// for gypsum products: 125 °F (52 °C). The International Mechanical
+	// Code, section 603.5.1 "Gypsum ducts", limits gypsum-board air shafts
+	// to air temperatures that "do not exceed 125ºF (52ºC)" (read in the
+	// Washington State adoption, WAC 51-52-0603), and the International
+	// Residential Code, M1601.1.1 item 5, sets the same limit for gypsum
+	// return-air ducts and plenums.
 	hotLimitC = 52
 	// frostWetMemoryS: a surface that was wet within the previous 24 hours
 	// still holds water when it freezes (common practice, no source).
