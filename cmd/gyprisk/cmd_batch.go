@@ -66,7 +66,9 @@ limit and by worst rating in DIR/portfolio.csv and DIR/portfolio.pdf.
 A project that cannot be assessed does not stop the others: it is reported
 on standard error and listed in the portfolio with status "failed" and its
 error, and the exit status is 1. A failed project writes no outputs (files
-of an earlier run under its name are left as they were).
+of an earlier run under its name are left as they were). Progress goes to
+standard error as projects finish (a bar on a terminal, a line per
+project otherwise); --quiet keeps only the failures and the summary.
 
 portfolio.csv: one row per result, fewest years to the loss limit first
 (empty when the surface does not recede; the _p10/_p90 band is empty
