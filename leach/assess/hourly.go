@@ -149,7 +149,9 @@ func assessElement(e *element, outdoor, room *siteHours, chem *chemistry, keep b
 		}
 		plane := solar.NewPlane(e.tiltDeg, e.azimuthDeg)
 		surf := surface.NewSurface(e.tiltDeg, e.solarAbsorptance, surfaceEmissivity)
-		surf.UWPerM2K = surfaceConductance(e.wallUValue)
+		wall := surfaceConductance(e.wallUValue)
+		heatCap := e.heatCapacityJPerM2K()
+		prevT := math.NaN()
 		sinAz, cosAz := math.Sincos(e.azimuthDeg * math.Pi / 180)
 		sinT, cosT := math.Sincos(e.tiltDeg * math.Pi / 180)
 		// sin 180° and cos 90° are 10⁻¹⁶, not 0: snap them, so a soffit
@@ -180,11 +182,23 @@ func assessElement(e *element, outdoor, room *siteHours, chem *chemistry, keep b
 			// Surface state.
 			irr := axis.sky[i].OnPlane(&plane, axis.site.groundAlbedo)
 			hc := surface.ConvectiveCoefficient(axis.windMS[i])
+			// The gypsum layer's heat capacity enters by a backward Euler
+			// step: C/Δt·(θ_prev − θ_s) is one more linear conductance, to
+			// last hour's surface temperature, beside the wall's Λ·(θ_i − θ_s).
+			// After a gap (or at the start) the layer starts at air
+			// temperature.
+			if sh := axis; i == 0 || sh.dtS[i] != sh.endS[i]-sh.endS[i-1] {
+				prevT = axis.tempC[i]
+			}
+			capG := heatCap / axis.dtS[i]
+			surf.UWPerM2K = wall + capG
+			inner := (wall*e.indoorTempC + capG*prevT) / (wall + capG)
 			cond := surface.Conditions{AirTempC: axis.tempC[i], VapourPa: axis.vapPa[i], HcWPerM2K: hc,
-				SkyTempC: axis.skyTempC[i], IrradianceWM2: irr.TotalWM2, InnerTempC: e.indoorTempC, Wet: h.deposit+h.runoff > 0}
+				SkyTempC: axis.skyTempC[i], IrradianceWM2: irr.TotalWM2, InnerTempC: inner, Wet: h.deposit+h.runoff > 0}
 			st := surf.Solve(&cond)
 			h.tempC = st.TempC
-			h.dTdAlpha = irr.TotalWM2 / (hc + surface.RadiativeCoefficient(surfaceEmissivity, st.TempC))
+			prevT = st.TempC
+			h.dTdAlpha = irr.TotalWM2 / (hc + surface.RadiativeCoefficient(surfaceEmissivity, st.TempC) + surf.UWPerM2K)
 			h.condKg = condensate(st.VapourFluxKgPerM2S, axis.dtS[i])
 			h.vapPa = axis.vapPa[i]
 			h.rhPct = climate.RHAtPct(h.vapPa, h.tempC)
@@ -229,6 +243,24 @@ func condensate(fluxKgPerM2S, dtS float64) float64 {
 // bone-dry hour gives a large negative number, not −Inf.
 func lnWaterActivity(rhPct float64) float64 {
 	return math.Log(math.Max(rhPct, 1e-4) / 100)
+}
+
+// gypsumSpecificHeatJPerKgK is the specific heat capacity of gypsum
+// plasters, 1000 J/(kg·K) (EN ISO 10456:2007 Table 3, gypsum plastering;
+// from memory).
+const gypsumSpecificHeatJPerKgK = 1000
+
+// heatCapacityJPerM2K is the heat capacity of the element's gypsum layer
+// per square metre, the thermal mass that damps its surface temperature
+// from hour to hour:
+//
+//	C = ρ · c_p · d    (J/(m²·K))
+//
+// with the bulk density ρ, c_p = gypsumSpecificHeatJPerKgK and the layer
+// thickness d (0 when no thickness is given: no mass). Whatever lies behind
+// the layer acts only through the wall's U-value.
+func (e *element) heatCapacityJPerM2K() float64 {
+	return e.bulkDensityKgM3 * gypsumSpecificHeatJPerKgK * e.thicknessMM / 1000
 }
 
 // surfaceConductance is the conductance (W/(m²·K)) from the exterior

@@ -129,30 +129,31 @@ type ElementResult struct {
 // ElementInputs echoes the resolved inputs of an element (after material
 // defaults and variant overrides), so a reader can see what was assumed.
 type ElementInputs struct {
-	AzimuthDeg         float64 `json:"azimuth_deg"`
-	TiltDeg            float64 `json:"tilt_deg"`
-	HeightM            float64 `json:"height_m"`
-	ObstructionM       float64 `json:"obstruction_m"`
-	WallFactor         float64 `json:"wall_factor"`
-	RoughnessCoeff     float64 `json:"roughness_coefficient"`
-	TopographyFactor   float64 `json:"topography_factor"`
-	ObstructionFactor  float64 `json:"obstruction_factor"`
-	RunoffHeightM      float64 `json:"runoff_height_m"`
-	FlowLengthM        float64 `json:"flow_length_m"`
-	RunoffFraction     float64 `json:"runoff_fraction"`
-	SolarAbsorptance   float64 `json:"solar_absorptance"`
-	ThicknessMM        float64 `json:"thickness_mm"`
-	LossLimitMM        float64 `json:"loss_limit_mm"`
-	BulkDensityKgM3    float64 `json:"bulk_density_kg_m3"`
-	GypsumFraction     float64 `json:"gypsum_fraction"`
-	Porosity           float64 `json:"porosity"`
-	MouldClass         string  `json:"mould_class"`
-	RepellentFraction  float64 `json:"repellent_fraction"`
-	RepellentLifeYears float64 `json:"repellent_life_years"`
-	WallUValueWPerM2K  float64 `json:"wall_u_value_w_m2k"`
-	TemperatureFactor  float64 `json:"temperature_factor,omitempty"`
-	HumidityClass      int     `json:"humidity_class,omitempty"`
-	IndoorClimate      string  `json:"indoor_climate,omitempty"`
+	AzimuthDeg          float64 `json:"azimuth_deg"`
+	TiltDeg             float64 `json:"tilt_deg"`
+	HeightM             float64 `json:"height_m"`
+	ObstructionM        float64 `json:"obstruction_m"`
+	WallFactor          float64 `json:"wall_factor"`
+	RoughnessCoeff      float64 `json:"roughness_coefficient"`
+	TopographyFactor    float64 `json:"topography_factor"`
+	ObstructionFactor   float64 `json:"obstruction_factor"`
+	RunoffHeightM       float64 `json:"runoff_height_m"`
+	FlowLengthM         float64 `json:"flow_length_m"`
+	RunoffFraction      float64 `json:"runoff_fraction"`
+	SolarAbsorptance    float64 `json:"solar_absorptance"`
+	ThicknessMM         float64 `json:"thickness_mm"`
+	LossLimitMM         float64 `json:"loss_limit_mm"`
+	BulkDensityKgM3     float64 `json:"bulk_density_kg_m3"`
+	GypsumFraction      float64 `json:"gypsum_fraction"`
+	Porosity            float64 `json:"porosity"`
+	MouldClass          string  `json:"mould_class"`
+	RepellentFraction   float64 `json:"repellent_fraction"`
+	RepellentLifeYears  float64 `json:"repellent_life_years"`
+	WallUValueWPerM2K   float64 `json:"wall_u_value_w_m2k"`
+	HeatCapacityJPerM2K float64 `json:"heat_capacity_j_m2k"` // of the gypsum layer, ρ·c_p·d
+	TemperatureFactor   float64 `json:"temperature_factor,omitempty"`
+	HumidityClass       int     `json:"humidity_class,omitempty"`
+	IndoorClimate       string  `json:"indoor_climate,omitempty"`
 }
 
 // WaterOut is the water that reaches and runs over the surface.

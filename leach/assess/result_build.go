@@ -20,7 +20,7 @@ func (r *elementRun) result(scenario string) ElementResult {
 			ThicknessMM: e.thicknessMM, LossLimitMM: e.lossLimitMM,
 			BulkDensityKgM3: e.bulkDensityKgM3, GypsumFraction: e.gypsumFrac, Porosity: e.porosity,
 			MouldClass: e.mouldClass, RepellentFraction: e.repellentFrac, RepellentLifeYears: e.repellentLife,
-			WallUValueWPerM2K: e.wallUValue,
+			WallUValueWPerM2K: e.wallUValue, HeatCapacityJPerM2K: e.heatCapacityJPerM2K(),
 			TemperatureFactor: e.temperatureFactor, HumidityClass: e.humidityClass, IndoorClimate: e.indoorClimate,
 		},
 		Water: WaterOut{

@@ -106,11 +106,13 @@ func (t Thresholds) rate(r *ElementResult) {
 		rateUp(r.Dehydration.UnstableHoursPerYear, t.DehydrationModerateHours, t.DehydrationHighHours),
 		rateUp(r.Dehydration.HoursAbove52CPerYear, t.HotModerateHours, t.HotHighHours))
 	r.Ratings.Condensation = rateUp(r.Condensation.HoursPerYear, t.CondensationModerateHours, t.CondensationHighHours)
-	// A month failing the ISO 13788 criterion (monthly mean surface RH
-	// above 80 %) makes the mould rating at least moderate, whatever the
-	// VTT index says.
+	// On an interior surface, a month failing the ISO 13788 criterion
+	// (monthly mean surface RH above 80 %) makes the mould rating at least
+	// moderate, whatever the VTT index says. The criterion is the
+	// standard's for interior surfaces; outdoors the air itself exceeds
+	// 80 % for months in a maritime winter, so there it is reported only.
 	r.Ratings.Mould = rateUp(r.Mould.IndexMax, t.MouldModerateIndex, t.MouldHighIndex)
-	if r.Mould.MonthsOver80Pct > 0 {
+	if r.Mould.MonthsOver80Pct > 0 && r.Exposure == "interior" {
 		r.Ratings.Mould = worse(r.Ratings.Mould, Moderate)
 	}
 }
