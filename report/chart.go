@@ -34,13 +34,38 @@ func newChart(d *doc, bx, by, bw, bh float64, xr, yr [2]float64) *chart {
 		xmin: xr[0], xmax: xr[1], ymin: yr[0], ymax: yr[1]}
 }
 
+// fx and fy map data to page coordinates. Points far outside the plot
+// are pulled in to a page's width around it, so that no absurd number
+// reaches the PDF; callers clip lines that matter to the plot first.
 func (c *chart) fx(v float64) float64 {
+	var x float64
 	if c.logX {
-		return c.x + (math.Log10(v)-math.Log10(c.xmin))/(math.Log10(c.xmax)-math.Log10(c.xmin))*c.w
+		x = c.x + (math.Log10(v)-math.Log10(c.xmin))/(math.Log10(c.xmax)-math.Log10(c.xmin))*c.w
+	} else {
+		x = c.x + (v-c.xmin)/(c.xmax-c.xmin)*c.w
 	}
-	return c.x + (v-c.xmin)/(c.xmax-c.xmin)*c.w
+	return clampf(x, c.x-pageW, c.x+c.w+pageW)
 }
-func (c *chart) fy(v float64) float64 { return c.y + c.h - (v-c.ymin)/(c.ymax-c.ymin)*c.h }
+func (c *chart) fy(v float64) float64 {
+	return clampf(c.y+c.h-(v-c.ymin)/(c.ymax-c.ymin)*c.h, c.y-pageH, c.y+c.h+pageH)
+}
+
+func clampf(v, lo, hi float64) float64 {
+	if math.IsNaN(v) {
+		return lo
+	}
+	return math.Max(lo, math.Min(hi, v))
+}
+
+// clipRay returns the point where the segment from (x0, y0) to (x1, y1)
+// crosses x = xmax, or (x1, y1) when it ends before.
+func clipRay(x0, y0, x1, y1, xmax float64) (float64, float64) {
+	if x1 <= xmax || x1 == x0 {
+		return x1, y1
+	}
+	t := (xmax - x0) / (x1 - x0)
+	return xmax, y0 + t*(y1-y0)
+}
 
 // frame draws grid lines, ticks, tick labels and axis labels.
 func (c *chart) frame(xt, yt []tick, xlabel, ylabel string) {

@@ -45,8 +45,11 @@ func (r *reportState) element(i int, g elementGroup) {
 		fmt.Sprintf("Figure %d the mould index", fMould),
 		fmt.Sprintf("Figure %d the surface temperature and humidity against the gypsum–bassanite equilibrium", fSurface))
 	text := "Charts for the element as built under the present climate: " + strings.Join(refs, "; ") + "."
-	if !hasRain {
+	switch {
+	case !hasRain && e.Water.CondensateLM2PerYear > 0:
 		text += fmt.Sprintf(" No rain reaches this element; the water on its surface is condensate, %s L/m² a year.", fmtWater(e.Water.CondensateLM2PerYear))
+	case !hasRain:
+		text += " Neither rain nor condensate reaches its surface."
 	}
 	if len(e.Daily) == 0 {
 		text += " The day-by-day trace was not available, so the charts use monthly values."
@@ -82,8 +85,10 @@ func (r *reportState) element(i int, g elementGroup) {
 	d.heading(3, "Findings")
 	if len(e.Findings) > 0 {
 		d.bullets(e.Findings)
+	} else {
+		// The engine gave no sentences: phrase the figures here.
+		d.para(strings.Join(plainWords(e), " "))
 	}
-	d.para(strings.Join(plainWords(e), " "))
 
 	if len(g.results) > 1 {
 		r.comparison(g)
@@ -141,8 +146,11 @@ func inputRows(e *assess.ElementResult) [][]cell {
 	if in.MouldClass != "" {
 		add("Mould class", in.MouldClass)
 	}
-	nz("Repellent share", in.RepellentFraction, fmtPlain, "")
-	nz("Repellent life", in.RepellentLifeYears, fmtPlain, " years")
+	if in.RepellentFraction > 0 {
+		add("Repellent share", fmtPlain(in.RepellentFraction))
+		nz("Repellent life", in.RepellentLifeYears, fmtPlain, " years")
+	}
+	nz("Flow length", in.FlowLengthM, fmtPlain, " m")
 	nz("Temperature factor", in.TemperatureFactor, fmtPlain, "")
 	if in.HumidityClass != 0 {
 		add("Humidity class", fmt.Sprint(in.HumidityClass))
@@ -176,6 +184,9 @@ func hasRainWater(e *assess.ElementResult) bool {
 
 func lossCaption(e *assess.ElementResult) string {
 	l := e.Leaching
+	if l.YearsToLimit == nil || *l.YearsToLimit >= yearsCap {
+		return fmt.Sprintf("Surface lost from %s, mm, over the record, against its %s mm loss limit.", e.ID, fmtMM(e.Inputs.LossLimitMM))
+	}
 	s := fmt.Sprintf("Surface lost from %s, mm, over the record (solid) and at the same rate until the %s mm loss limit (dashed)", e.ID, fmtMM(e.Inputs.LossLimitMM))
 	if l.YearsToLimitP10 != nil && l.YearsToLimitP90 != nil {
 		s += "; shaded: 10–90 % range of the Monte Carlo samples"
@@ -188,7 +199,10 @@ func plainWords(e *assess.ElementResult) []string {
 	l, in := e.Leaching, e.Inputs
 	name := nameOf(e)
 	var s []string
-	if l.YearsToLimit != nil {
+	if l.YearsToLimit != nil && *l.YearsToLimit >= yearsCap {
+		s = append(s, fmt.Sprintf("At the current rate the %s would take more than %s years to lose its %s mm: in practice rain does not wear it away (%s mm a year).",
+			lowerFirst(name), sig(yearsCap, 4), fmtMM(in.LossLimitMM), fmtRecession(l.RecessionMMPerYear)))
+	} else if l.YearsToLimit != nil {
 		t := fmt.Sprintf("At the current rate the %s loses its %s mm of sacrificial plaster in about %s years (%s mm a year)",
 			lowerFirst(name), fmtMM(in.LossLimitMM), fmtYears(*l.YearsToLimit), fmtRecession(l.RecessionMMPerYear))
 		if l.YearsToLimitP10 != nil && l.YearsToLimitP90 != nil {
@@ -248,15 +262,17 @@ func (r *reportState) comparison(g elementGroup) {
 		rows = append(rows, summaryCells(e, false))
 	}
 	d.table(summaryColumns(false), rows, tableOpts{zebra: true})
+	// The headline finding of each variant and scenario; the rest differ
+	// from the base case's only in their figures, which the table gives.
+	var heads []string
 	for _, e := range g.results {
 		if e == base || len(e.Findings) == 0 {
 			continue
 		}
-		d.font("B", bodySize)
-		d.ensure(2 * lineH)
-		d.pdf.SetX(marginL)
-		d.pdf.CellFormat(contentW, lineH, fmt.Sprintf("Variant %s under scenario %s", e.Variant, e.Scenario), "", 2, "L", false, 0, "")
-		d.bullets(e.Findings)
+		heads = append(heads, fmt.Sprintf("%s · %s: %s", e.Variant, e.Scenario, e.Findings[0]))
+	}
+	if len(heads) > 0 {
+		d.bullets(heads)
 	}
 	h := 20 + 8*float64(len(g.results))
 	d.figure(n, h, fmt.Sprintf("Years until %s reaches its loss limit, by variant and scenario (logarithmic scale); whiskers: 10–90 %% range where sampled. Background: the rating bands (high below %s years, moderate below %s).", g.id, fmtYears(r.out.Thresholds.LeachingHighYears), fmtYears(r.out.Thresholds.LeachingModerateYears)),

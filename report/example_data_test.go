@@ -73,8 +73,8 @@ func inventedOutput(samples int) *assess.Output {
 
 	type spec struct {
 		id, label, variant, scenario, material, exposure string
-		az, tilt, water, runoff, cond, recession, tmax    float64
-		unstable, above52, condH, mould                   float64
+		az, tilt, water, runoff, cond, recession, tmax   float64
+		unstable, above52, condH, mould                  float64
 	}
 	specs := []spec{
 		{"sw-facade", "South-west facade", "base", "present", "gypsum-lime mortar", "exterior", 225, 90, 96, 0, 0.4, 0.031, 47.5, 6, 0, 38, 0.6},

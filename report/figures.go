@@ -3,6 +3,7 @@ package report
 import (
 	"fmt"
 	"math"
+	"strings"
 	"time"
 
 	"github.com/gyprisk/gyprisk/leach/assess"
@@ -197,13 +198,20 @@ func (r *reportState) drivingRainFigure(y, h float64) {
 
 	// Values beside the rose, in two column pairs.
 	left := marginL + 94
+	pairs, faces := 2, fmtAzimuth
 	cols := []column{{"Wall faces", 24, "L"}, {"L/m² a year", 16, "R"}, {"Wall faces", 24, "L"}, {"L/m² a year", 16, "R"}}
+	if len(dr) > 16 {
+		pairs, faces = 3, func(az float64) string { return fmtAzimuth(az)[:strings.Index(fmtAzimuth(az), " (")] }
+		cols = []column{{"Faces", 12, "L"}, {"L/m² a year", 14, "R"}, {"Faces", 12, "L"}, {"L/m² a year", 14, "R"}, {"Faces", 12, "L"}, {"L/m² a year", 14, "R"}}
+	}
 	var rows [][]cell
-	half := (len(dr) + 1) / 2
-	for i := 0; i < half; i++ {
-		row := []cell{{text: fmtAzimuth(dr[i].AzimuthDeg)}, {text: fmtWater(dr[i].LPerM2PerYear)}}
-		if j := i + half; j < len(dr) {
-			row = append(row, cell{text: fmtAzimuth(dr[j].AzimuthDeg)}, cell{text: fmtWater(dr[j].LPerM2PerYear)})
+	nrow := (len(dr) + pairs - 1) / pairs
+	for i := 0; i < nrow; i++ {
+		var row []cell
+		for k := 0; k < pairs; k++ {
+			if j := i + k*nrow; j < len(dr) {
+				row = append(row, cell{text: faces(dr[j].AzimuthDeg)}, cell{text: fmtWater(dr[j].LPerM2PerYear)})
+			}
 		}
 		rows = append(rows, row)
 	}
@@ -268,6 +276,10 @@ func (r *reportState) lossChart(e *assess.ElementResult, bx, by, bw, bh float64)
 			band = true
 		}
 	}
+	// A limit beyond yearsCap is drawn like no recession at all.
+	if l.YearsToLimit != nil && *l.YearsToLimit >= yearsCap {
+		l.YearsToLimit, l.YearsToLimitP10, l.YearsToLimitP90 = nil, nil, nil
+	}
 	recEnd := r.out.Climate.Years
 	endLoss, endLo, endHi := 0.0, 0.0, 0.0
 	if len(xs) > 0 {
@@ -297,13 +309,20 @@ func (r *reportState) lossChart(e *assess.ElementResult, bx, by, bw, bh float64)
 	c := panel(d, bx, by, bw, bh, xr, yr, 14, 10)
 	c.frame(xt, yt, "years from the start of the record", "surface lost, mm")
 	if l.YearsToLimit != nil {
+		xm := xr[1]
 		if l.YearsToLimitP10 != nil && l.YearsToLimitP90 != nil {
-			c.polygon([]gofpdf.PointType{
-				{X: c.fx(recEnd), Y: c.fy(endHi)}, {X: c.fx(*l.YearsToLimitP10), Y: c.fy(limit)},
-				{X: c.fx(*l.YearsToLimitP90), Y: c.fy(limit)}, {X: c.fx(recEnd), Y: c.fy(endLo)},
-			}, bandOchre)
+			pts := []gofpdf.PointType{{X: c.fx(recEnd), Y: c.fy(endHi)}}
+			x, y := clipRay(recEnd, endHi, *l.YearsToLimitP10, limit, xm)
+			pts = append(pts, gofpdf.PointType{X: c.fx(x), Y: c.fy(y)})
+			if *l.YearsToLimitP10 <= xm && *l.YearsToLimitP90 > xm {
+				pts = append(pts, gofpdf.PointType{X: c.fx(xm), Y: c.fy(limit)})
+			}
+			x, y = clipRay(recEnd, endLo, *l.YearsToLimitP90, limit, xm)
+			pts = append(pts, gofpdf.PointType{X: c.fx(x), Y: c.fy(y)}, gofpdf.PointType{X: c.fx(recEnd), Y: c.fy(endLo)})
+			c.polygon(pts, bandOchre)
 		}
-		c.line([]float64{recEnd, *l.YearsToLimit}, []float64{endLoss, limit}, seriesBrick, 0.5, []float64{1.4, 1})
+		x, y := clipRay(recEnd, endLoss, *l.YearsToLimit, limit, xm)
+		c.line([]float64{recEnd, x}, []float64{endLoss, y}, seriesBrick, 0.5, []float64{1.4, 1})
 	}
 	if band {
 		c.band(xs, lo, hi, bandBlue)
@@ -330,7 +349,11 @@ func (r *reportState) lossChart(e *assess.ElementResult, bx, by, bw, bh float64)
 	} else {
 		d.color(inkSoft)
 		p.SetXY(c.x, c.y+c.h/2)
-		p.CellFormat(c.w, 3, "the surface does not recede", "", 0, "C", false, 0, "")
+		msg := "the surface does not recede"
+		if e.Leaching.YearsToLimit != nil {
+			msg = "loss limit not reached within " + sig(yearsCap, 4) + " years"
+		}
+		p.CellFormat(c.w, 3, msg, "", 0, "C", false, 0, "")
 	}
 	d.color(ink)
 	items := []legendItem{{"record", seriesBlue, "line"}}
@@ -490,7 +513,7 @@ func (r *reportState) compareChart(g elementGroup, y, h float64) {
 		l := e.Leaching
 		for _, v := range []*float64{l.YearsToLimit, l.YearsToLimitP10, l.YearsToLimitP90} {
 			if v != nil && *v > 0 {
-				vals = append(vals, *v)
+				vals = append(vals, math.Min(*v, yearsCap))
 			}
 		}
 	}
@@ -545,16 +568,17 @@ func (r *reportState) compareChart(g elementGroup, y, h float64) {
 			p.CellFormat(19, 3, noRecession+" →", "", 0, "L", false, 0, "")
 			continue
 		}
+		capped := func(v float64) float64 { return c.fx(math.Min(v, yearsCap)) }
 		if l.YearsToLimitP10 != nil && l.YearsToLimitP90 != nil {
 			d.draw(ink)
 			p.SetLineWidth(0.35)
-			x1, x2 := c.fx(*l.YearsToLimitP10), c.fx(*l.YearsToLimitP90)
+			x1, x2 := capped(*l.YearsToLimitP10), capped(*l.YearsToLimitP90)
 			p.Line(x1, yy, x2, yy)
 			p.Line(x1, yy-1.2, x1, yy+1.2)
 			p.Line(x2, yy-1.2, x2, yy+1.2)
 		}
 		d.fill(seriesBlue)
-		xx := c.fx(*l.YearsToLimit)
+		xx := capped(*l.YearsToLimit)
 		p.Circle(xx, yy, 1.2, "F")
 		d.font("", tinySize)
 		d.color(ink)

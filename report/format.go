@@ -66,11 +66,27 @@ func signed(s string) string {
 func fmtWater(lm2 float64) string { return sig(lm2, 3) }
 
 // fmtRecession formats a recession rate in mm/year: two significant
-// figures, because the rate is uncertain to well over a few per cent.
-func fmtRecession(mmPerYear float64) string { return sig(mmPerYear, 2) }
+// figures, because the rate is uncertain to well over a few per cent;
+// rates below 0.001 mm/year (a micrometre a year) print as "< 0.001".
+func fmtRecession(mmPerYear float64) string {
+	if mmPerYear > 0 && mmPerYear < 0.001 {
+		return "< 0.001"
+	}
+	return sig(mmPerYear, 2)
+}
 
-// fmtYears formats a number of years: two significant figures.
-func fmtYears(y float64) string { return sig(y, 2) }
+// yearsCap is the longest time to a loss limit the report prints as a
+// number; beyond it the figure says nothing a building owner can use.
+const yearsCap = 1000.0
+
+// fmtYears formats a number of years: two significant figures, and
+// "> 1000" from yearsCap on.
+func fmtYears(y float64) string {
+	if y >= yearsCap {
+		return "> " + sig(yearsCap, 4)
+	}
+	return sig(y, 2)
+}
 
 // fmtHours formats hours per year, rounded to the hour.
 func fmtHours(h float64) string { return fixed(h, 0) }
@@ -173,7 +189,7 @@ func fmtAzimuth(azDeg float64) string {
 // fmtBand formats a 10–90 % band "lo–hi" with f, or "" when either end is
 // missing.
 func fmtBand(lo, hi *float64, f func(float64) string) string {
-	if lo == nil || hi == nil {
+	if lo == nil || hi == nil || (*lo == 0 && *hi == 0) {
 		return ""
 	}
 	return f(*lo) + "–" + f(*hi)

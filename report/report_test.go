@@ -143,7 +143,12 @@ func TestSummaryFiguresMatchOutput(t *testing.T) {
 			if b := fmtBand(e.Leaching.YearsToLimitP10, e.Leaching.YearsToLimitP90, fmtYears); b != "" && !strings.Contains(text, b) {
 				t.Errorf("samples=%d: %s/%s/%s: band %q of years to limit missing", samples, e.ID, e.Variant, e.Scenario, b)
 			}
-			for _, f := range e.Findings {
+			// Every finding of the base case, the headline of the others.
+			fs := e.Findings
+			if e.Variant != "base" || e.Scenario != "present" {
+				fs = fs[:1]
+			}
+			for _, f := range fs {
 				if !strings.Contains(strings.Join(strings.Fields(text), " "), f) {
 					t.Errorf("finding %q missing", f)
 				}
@@ -164,6 +169,9 @@ func firstLine(id string) string {
 // TestPlainWordsUseTheFigures checks the sentence a client reads.
 func TestPlainWordsUseTheFigures(t *testing.T) {
 	out := inventedOutput(0)
+	for i := range out.Elements {
+		out.Elements[i].Findings = nil // the report phrases them itself
+	}
 	e := &out.Elements[1] // cornice-top, base, present: 0.22 mm a year, 5 mm limit
 	got := plainWords(e)[0]
 	want := "At the current rate the cornice top loses its 5 mm of sacrificial plaster in about 23 years (0.22 mm a year)."

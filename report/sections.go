@@ -337,7 +337,7 @@ func (r *reportState) climate() {
 	case c.Gaps == 0 && c.MissingValues == 0:
 		text += "It has no gaps and no missing values."
 	default:
-		text += fmt.Sprintf("It has %d gaps and %d missing values; section 4 lists how each was handled.", c.Gaps, c.MissingValues)
+		text += fmt.Sprintf("It has %s and %s; section 4 lists how each was handled.", plural(c.Gaps, "gap", "gaps"), plural(c.MissingValues, "missing value", "missing values"))
 	}
 	if c.ClippedRHCount > 0 {
 		text += fmt.Sprintf(" %d relative humidity readings above 100 %% were set to 100 %%.", c.ClippedRHCount)
