@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"io"
 	"sort"
+	"strings"
 
 	"github.com/gyprisk/gyprisk/leach/assess"
 )
@@ -231,7 +232,7 @@ func countNonNil(outs []*assess.Output) int {
 func portfolioColumns() []column {
 	return []column{
 		{"#", 8, "R"}, {"Building", 36, "L"}, {"Element", 34, "L"}, {"Variant · scenario", 28, "L"},
-		{"Years to loss limit", 24, "R"}, {"Worst rating", 22, "L"}, {"Rated so for", 22, "L"},
+		{"Years to loss limit", 24, "R"}, {"Worst rating", 22, "L"}, {"Risks rated so", 22, "L"},
 	}
 }
 
@@ -239,12 +240,9 @@ func portfolioCells(rows []PortfolioRow) [][]cell {
 	var out [][]cell
 	for i, r := range rows {
 		l := assess.LeachingOut{YearsToLimit: r.YearsToLimit, YearsToLimitP10: r.YearsToLimitP10, YearsToLimitP90: r.YearsToLimitP90}
-		of := ""
-		for j, w := range r.WorstOf {
-			if j > 0 {
-				of += ", "
-			}
-			of += w
+		of := strings.Join(r.WorstOf, ", ")
+		if len(r.WorstOf) == 4 {
+			of = "all four"
 		}
 		out = append(out, []cell{
 			{text: fmt.Sprint(i + 1)},

@@ -105,7 +105,7 @@ func (r *reportState) cover() {
 	r.kv(rows, 42)
 
 	d.subheading("Input files")
-	cols := []column{{"Role", 34, "L"}, {"File and SHA-256", 106, "L"}, {"Period", 34, "L"}}
+	cols := []column{{"Role", 30, "L"}, {"File and SHA-256", 102, "L"}, {"Period", 42, "L"}}
 	var cells [][]cell
 	for _, in := range out.Inputs {
 		cells = append(cells, []cell{{text: in.Role}, {text: in.Path, sub: in.SHA256, subMono: true}, {text: fmtPeriod(in.Start, in.End)}})
