@@ -170,7 +170,7 @@ func TestAssessHourlyTrace(t *testing.T) {
 	}
 	var out struct {
 		Elements []struct {
-			ID   string `json:"id"`
+			ID    string `json:"id"`
 			Mould struct {
 				IndexMax float64 `json:"index_max"`
 			} `json:"mould"`
