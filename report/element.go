@@ -2,6 +2,8 @@ package report
 
 import (
 	"fmt"
+	"math"
+	"sort"
 	"strings"
 
 	"github.com/gyprisk/gyprisk/leach/assess"
@@ -90,9 +92,27 @@ func (r *reportState) element(i int, g elementGroup) {
 		d.para(strings.Join(plainWords(e), " "))
 	}
 
+	if len(e.Leaching.Sensitivity) > 0 {
+		r.sensitivity(e)
+	}
 	if len(g.results) > 1 {
 		r.comparison(g)
 	}
+}
+
+// sensitivity lists the sampled inputs by how strongly they move the
+// recession (Spearman rank correlation over the Monte Carlo samples).
+func (r *reportState) sensitivity(e *assess.ElementResult) {
+	d := r.d
+	d.heading(3, "What moves the answer")
+	ss := append([]assess.Sensitivity(nil), e.Leaching.Sensitivity...)
+	sort.SliceStable(ss, func(i, j int) bool { return math.Abs(ss[i].RankCorrelation) > math.Abs(ss[j].RankCorrelation) })
+	d.para(fmt.Sprintf("Over the %d Monte Carlo samples, %s moves the recession most. A rank correlation near +1 means more of that input, more loss; near −1, less loss; near 0, little effect.", r.out.Options.Samples, ss[0].Input))
+	var rows [][]cell
+	for _, s := range ss {
+		rows = append(rows, []cell{{text: s.Input}, {text: fixed(s.RankCorrelation, 2)}})
+	}
+	d.table([]column{{"Sampled input", 70, "L"}, {"Rank correlation with recession", 40, "R"}}, rows, tableOpts{zebra: true})
 }
 
 // describe says in one sentence what the element is and how it sits.

@@ -86,6 +86,7 @@ func TestReportHoldsEveryElementSectionAndCaution(t *testing.T) {
 		chSummary, chClimate, chElements, chNotes, chMethods, chCautions,
 		"Traceability", "Input files", "Contents", "Findings", "Variants and scenarios compared",
 		"What this assessment does not cover", "Rating thresholds and where they come from",
+		"What moves the answer", "wall factor 0.71",
 		inventedBanner,
 		out.Database, out.Tool.Version, "500 Monte Carlo samples, seed 42",
 		"ISO 15927-3:2009", "ISO 13788:2012", "ISO 6946:2017", "Jeschke", "Nusselt", "Hukka", "Ojanen", "52 °C",
