@@ -42,6 +42,15 @@ func (s *Series) MedianIntervalS() float64 {
 	if n < 2 {
 		return 3600
 	}
+	// Fast path: a regular record (the usual case) needs no sort.
+	first := s.Records[1].Time.Sub(s.Records[0].Time)
+	regular := true
+	for i := 2; i < n && regular; i++ {
+		regular = s.Records[i].Time.Sub(s.Records[i-1].Time) == first
+	}
+	if regular {
+		return first.Seconds()
+	}
 	d := make([]int64, n-1)
 	for i := 1; i < n; i++ {
 		d[i-1] = int64(s.Records[i].Time.Sub(s.Records[i-1].Time))
