@@ -120,3 +120,22 @@ func BenchmarkFilmTable(b *testing.B) {
 		sinkFilm = tab.Saturation(m.Groups(12, hs[i%4], ts[(i/4)%4]))
 	}
 }
+
+func TestFilmTableLogForm(t *testing.T) {
+	sol, _ := NewSolubilityTable(0, 100, 0.1, 0)
+	m, _ := NewFilmModel(Jeschke2001(sol), 0, 100, 0.1)
+	tab := m.Table()
+	for _, tc := range []float64{3, 20, 45} {
+		lk, lc, ld := m.LnProperties(tc)
+		for _, h := range []float64{3e-5, 4e-4} {
+			for _, ts := range []float64{2, 200} {
+				tau, da := m.Groups(tc, h, ts)
+				lt := lk + math.Log(ts) - math.Log(h) - lc
+				lda := lk + math.Log(h) - math.Ln2 - math.Log(1.5) - ld - lc
+				if got, want := tab.SaturationLn(lt, lda), tab.Saturation(tau, da); math.Abs(got-want) > 1e-12 {
+					t.Errorf("θ=%g h=%g t=%g: log form %.15f, direct %.15f", tc, h, ts, got, want)
+				}
+			}
+		}
+	}
+}

@@ -101,9 +101,20 @@ func (t *FilmTable) Saturation(tau, da float64) float64 {
 	if tau == 0 {
 		return 0
 	}
-	lt, ld := math.Log(tau), math.Log(da)
+	return t.SaturationLn(math.Log(tau), math.Log(da))
+}
+
+// SaturationLn is Saturation for ln τ and ln Da, for callers that carry
+// the groups as logarithms (sums of logs of their factors).
+func (t *FilmTable) SaturationLn(lt, ld float64) float64 {
+	if math.IsNaN(lt) || math.IsNaN(ld) {
+		return math.NaN()
+	}
 	if lt < t.lnTau0 || lt > t.lnTauMax || ld < t.lnDa0 || ld > t.lnDaMax {
-		return t.exact(tau, da)
+		if math.IsInf(lt, -1) {
+			return 0
+		}
+		return t.exact(math.Exp(lt), math.Exp(ld))
 	}
 	x := (lt - t.lnTau0) * t.invDTau
 	y := (ld - t.lnDa0) * t.invDDa
@@ -123,6 +134,15 @@ func (t *FilmTable) Saturation(tau, da float64) float64 {
 		return 1
 	}
 	return -math.Expm1(lnU)
+}
+
+// LnProperties returns ln k1 (mol/(m²·s)), ln c_eq (mol/m³) and ln D
+// (m²/s) at tempC, from which the logarithms of τ and Da follow:
+//
+//	ln τ  = ln k1 + ln t − ln h − ln c_eq
+//	ln Da = ln k1 + ln h − ln 3 − ln D − ln c_eq
+func (m *FilmModel) LnProperties(tempC float64) (lnK1, lnCeq, lnD float64) {
+	return math.Log(m.law.k1At(tempC)), math.Log(m.interp(m.ceq, tempC)), math.Log(m.interp(m.diff, tempC))
 }
 
 // Groups returns τ and Da of a film of thickness h (m) in contact for t (s)

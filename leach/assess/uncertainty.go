@@ -105,11 +105,25 @@ type mcPlan struct {
 	table         *leach.FilmTable
 }
 
+// mcHour is one wet hour whose film saturation changes from sample to
+// sample. The film groups are carried as logarithms at the deterministic
+// surface temperature θ0, with slopes for the sampled shift δθ:
+//
+//	ln τ  = ln k1 + ln t_c − ln δ − ln c_eq
+//	ln Da = ln k1 + ln δ − ln 3 − ln D − ln c_eq
+//	δ   = δ0·ρ^(1/3)·f_δ,  t_c = min(L·δ0/q0 · ρ^(−2/3)·f_t, Δt),  ρ = water/water0
+//
+// (Nusselt: δ ∝ q^(1/3), so the film speed q/δ ∝ ρ^(2/3)).
 type mcHour struct {
 	driven, runoff, rain, cond float64 // L/m² (after a repellent)
-	tempC, dTdAlpha            float64
-	delta0, water0             float64 // Nusselt thickness at the deterministic water
-	flowLengthM, dtS, wdt      float64 // wdt = trapezoid weight / Δt
+	dTdAlpha                   float64
+	water0                     float64
+	ceq, ceqSlope              float64 // g/L at θ0 and d/dθ
+	lnK1, lnCeq, lnDiff        float64 // at θ0
+	lnCeqSlope, lnDiffSlope    float64 // d/dθ
+	lnDelta0, lnContact0, lnDt float64
+	wdt                        float64 // trapezoid weight / Δt
+	frozenAt                   float64 // δθ at or below which the surface is frozen (no dissolution)
 }
 
 // plan builds the element's mcPlan.
@@ -140,9 +154,19 @@ func (r *elementRun) plan() *mcPlan {
 		}
 		q := water * 1e-3 * w.flowRunM / w.dtS
 		delta, _ := r.chem.film.Film(q, w.slopeDeg, w.tempC)
-		pl.hours = append(pl.hours, mcHour{driven: w.drivenL, runoff: w.runoffL, rain: w.rainL, cond: w.condL,
-			tempC: w.tempC, dTdAlpha: w.dTdAlpha, delta0: delta, water0: water,
-			flowLengthM: w.flowRunM, dtS: w.dtS, wdt: wdt})
+		t0 := clampChem(w.tempC)
+		lk, lc, ld := r.chem.film.LnProperties(t0)
+		lo, hi := clampChem(t0-0.05), clampChem(t0+0.05)
+		_, lcLo, ldLo := r.chem.film.LnProperties(lo)
+		_, lcHi, ldHi := r.chem.film.LnProperties(hi)
+		h := mcHour{driven: w.drivenL, runoff: w.runoffL, rain: w.rainL, cond: w.condL,
+			dTdAlpha: w.dTdAlpha, water0: water,
+			ceq: r.chem.sol.At(t0), ceqSlope: (r.chem.sol.At(hi) - r.chem.sol.At(lo)) / (hi - lo),
+			lnK1: lk, lnCeq: lc, lnDiff: ld,
+			lnCeqSlope: (lcHi - lcLo) / (hi - lo), lnDiffSlope: (ldHi - ldLo) / (hi - lo),
+			lnDelta0: math.Log(delta), lnContact0: math.Log(w.flowRunM * delta / q), lnDt: math.Log(w.dtS),
+			wdt: wdt, frozenAt: -w.tempC}
+		pl.hours = append(pl.hours, h)
 	}
 	return pl
 }
@@ -154,7 +178,6 @@ func (r *elementRun) plan() *mcPlan {
 // the deterministic temperature.
 func (r *elementRun) sampleRecession(pl *mcPlan, v *[numMC]float64) (rec, bare float64) {
 	e := r.e
-	film := r.chem.film.WithRateFactor(v[mcRateConst])
 	wf, sol := v[mcWallFactor], v[mcSolubility]
 	dAlpha := math.Max(-e.solarAbsorptance, math.Min(1-e.solarAbsorptance, v[mcAbsorptance]))
 	unrep := 1.0
@@ -165,18 +188,19 @@ func (r *elementRun) sampleRecession(pl *mcPlan, v *[numMC]float64) (rec, bare f
 	part := func(j int) float64 { return pl.sat[j] + dAlpha*pl.satSlope[j] }
 	g := sol * ((part(0)+part(1))*wf + part(2) + part(3))
 	gBare := sol * ((part(0)+part(1))*unrep*wf + part(2)*unrep + part(3))
+	s := sampleLogs{lnRate: math.Log(v[mcRateConst]), lnThick: math.Log(v[mcFilmThick]), lnContact: math.Log(v[mcContact])}
 	for k := range pl.hours {
 		h := &pl.hours[k]
-		t := h.tempC + dAlpha*h.dTdAlpha
-		if t <= 0 {
+		dT := dAlpha * h.dTdAlpha
+		if dT <= h.frozenAt {
 			continue
 		}
-		ceq := r.chem.sol.At(clampChem(t)) * sol
+		ceq := (h.ceq + h.ceqSlope*dT) * sol
 		water := (h.driven+h.runoff)*wf + h.rain + h.cond
-		g += water * ceq * pl.sampleSat(film, h, water, t, v) * h.wdt
+		g += water * ceq * pl.sampleSat(h, &s, water, dT) * h.wdt
 		if unrep != 1 {
 			wb := (h.driven+h.runoff)*unrep*wf + h.rain*unrep + h.cond
-			gBare += wb * ceq * pl.sampleSat(film, h, wb, t, v) * h.wdt
+			gBare += wb * ceq * pl.sampleSat(h, &s, wb, dT) * h.wdt
 		}
 	}
 	mmPerG := 1 / (e.bulkDensityKgM3 * v[mcDensity] * e.gypsumFrac)
@@ -188,13 +212,22 @@ func (r *elementRun) sampleRecession(pl *mcPlan, v *[numMC]float64) (rec, bare f
 	return rec, bare
 }
 
-// sampleSat is the film saturation of one hour in one sample.
-func (pl *mcPlan) sampleSat(film *leach.FilmModel, h *mcHour, water, tempC float64, v *[numMC]float64) float64 {
-	nusselt := h.delta0 * math.Cbrt(water/h.water0)
-	q := water * 1e-3 * h.flowLengthM / h.dtS
-	contact := math.Min(h.flowLengthM*nusselt/q*v[mcContact], h.dtS)
-	return pl.table.Saturation(film.Groups(clampChem(tempC), nusselt*v[mcFilmThick], contact))
+// sampleLogs are a sample's film multipliers as logarithms.
+type sampleLogs struct{ lnRate, lnThick, lnContact float64 }
+
+// sampleSat is the film saturation of one hour in one sample, for the
+// sample's water (L/m²) and surface temperature shift dT (K).
+func (pl *mcPlan) sampleSat(h *mcHour, s *sampleLogs, water, dT float64) float64 {
+	lnRho := math.Log(water / h.water0)
+	lnDelta := h.lnDelta0 + lnRho/3 + s.lnThick
+	lnContact := math.Min(h.lnContact0-2*lnRho/3+s.lnContact, h.lnDt)
+	lnK1 := h.lnK1 + s.lnRate
+	lnCeq := h.lnCeq + h.lnCeqSlope*dT
+	lnDiff := h.lnDiff + h.lnDiffSlope*dT
+	return pl.table.SaturationLn(lnK1+lnContact-lnDelta-lnCeq, lnK1+lnDelta-ln3-lnDiff-lnCeq)
 }
+
+var ln3 = math.Log(3)
 
 // uncertainty runs the samples for one result and fills its bands and
 // sensitivity ranking. Samples run on every core; each writes only its
