@@ -1,6 +1,7 @@
 package report
 
 import (
+	"bytes"
 	"fmt"
 	"strings"
 	"time"
@@ -53,10 +54,14 @@ func newDoc(title, site, footer string, invented bool, date time.Time, prev *lay
 	pdf.SetCreator("gyprisk", true)
 	pdf.SetMargins(marginL, marginT, marginR)
 	pdf.SetAutoPageBreak(true, marginB)
-	pdf.AddUTF8FontFromBytes(fontSans, "", goregular.TTF)
-	pdf.AddUTF8FontFromBytes(fontSans, "B", gobold.TTF)
-	pdf.AddUTF8FontFromBytes(fontSans, "I", goitalic.TTF)
-	pdf.AddUTF8FontFromBytes(fontMono, "", gomono.TTF)
+	// Each document gets its own copy of the font bytes: gofpdf v1.16.2
+	// pads font tables with append (utf8FontFile.generateChecksum), which
+	// would otherwise write into the shared embedded fonts, so two reports
+	// rendered at once (gyprisk batch) would race.
+	pdf.AddUTF8FontFromBytes(fontSans, "", bytes.Clone(goregular.TTF))
+	pdf.AddUTF8FontFromBytes(fontSans, "B", bytes.Clone(gobold.TTF))
+	pdf.AddUTF8FontFromBytes(fontSans, "I", bytes.Clone(goitalic.TTF))
+	pdf.AddUTF8FontFromBytes(fontMono, "", bytes.Clone(gomono.TTF))
 	d := &doc{pdf: pdf, title: title, site: site, footer: footer, invented: invented, prev: prev}
 	pdf.SetHeaderFuncMode(d.header, true)
 	pdf.SetFooterFunc(d.footerFunc)

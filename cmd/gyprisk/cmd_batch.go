@@ -242,18 +242,6 @@ func assessBatch(jobs []batchJob, opt assess.Options, o *batchOptions, done func
 	return results
 }
 
-// pdfMu lets one PDF be rendered at a time. gofpdf v1.16.2 pads each
-// font table to four bytes with append (utf8FontFile.generateChecksum),
-// which writes into the embedded font data that every document shares, so
-// two reports rendered at once race (go test -race shows it). The
-// assessment, by far the larger part of the work, still runs on every
-// core.
-//
-// TODO(lead): drop pdfMu once the report package gives each document its
-// own copy of the font bytes (bytes.Clone before AddUTF8FontFromBytes in
-// report/page.go).
-var pdfMu sync.Mutex
-
 // assessOne loads and assesses one project and writes its PDF and JSON.
 // A panic in the engine becomes this project's error, so it cannot take
 // the rest of the batch down with it.
@@ -275,10 +263,7 @@ func assessOne(j batchJob, opt assess.Options, o *batchOptions) (r batchResult) 
 		return r
 	}
 	if !o.noPDF {
-		pdfMu.Lock()
-		err := report.WriteFile(filepath.Join(o.outDir, j.name+".pdf"), out, report.Options{FixedDate: fixedDate(out)})
-		pdfMu.Unlock()
-		if err != nil {
+		if err := report.WriteFile(filepath.Join(o.outDir, j.name+".pdf"), out, report.Options{FixedDate: fixedDate(out)}); err != nil {
 			r.err = err
 			return r
 		}
@@ -319,8 +304,6 @@ func writePortfolio(results []batchResult, opt assess.Options, o *batchOptions) 
 			failures = append(failures, report.Failure{Project: r.job.path, Err: r.err.Error()})
 		}
 	}
-	pdfMu.Lock()
-	defer pdfMu.Unlock()
 	return report.WritePortfolioFile(filepath.Join(o.outDir, "portfolio.pdf"), outs,
 		report.Options{FixedDate: opt.Now, Failures: failures})
 }

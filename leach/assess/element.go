@@ -10,6 +10,7 @@ import (
 // the documented defaults. notes lists each default that was applied.
 type element struct {
 	id, label, variant, material, exposure string
+	description                            string // the project file's note
 	mat                                    Material
 
 	azimuthDeg, tiltDeg          float64
@@ -59,7 +60,7 @@ func resolve(base *ElementSpec, v *ElementSpec) (*element, error) {
 		variant = v.ID
 		spec = mergeSpec(*base, *v)
 	}
-	e := &element{id: spec.ID, label: spec.Label, variant: variant}
+	e := &element{id: spec.ID, label: spec.Label, variant: variant, description: spec.Note}
 	if e.label == "" {
 		e.label = spec.ID
 	}

@@ -12,7 +12,7 @@ func (r *elementRun) result(scenario string) ElementResult {
 	hoursPerYear := func(s float64) float64 { return s / 3600 / y }
 	res := ElementResult{
 		ID: e.id, Label: e.label, Variant: e.variant, Scenario: scenario,
-		Material: e.material, Exposure: e.exposure,
+		Material: e.material, Exposure: e.exposure, Description: e.description,
 		Inputs: ElementInputs{
 			AzimuthDeg: e.azimuthDeg, TiltDeg: e.tiltDeg, HeightM: e.heightM, ObstructionM: math.Max(e.obstructionM, 0),
 			WallFactor: e.wallFactor, RoughnessCoeff: r.cR, TopographyFactor: r.topography(), ObstructionFactor: r.obstruction,
@@ -99,7 +99,10 @@ func (r *elementRun) bareRecession(rec float64) float64 {
 //
 // nil when the surface does not recede.
 func yearsToLimit(e *element, rate, bare float64) *float64 {
-	if !(rate > 0) && !(bare > 0) {
+	// Below a micrometre in a thousand years the surface does not recede
+	// in any sense that matters; the quotient would only print round-off.
+	const negligibleMMPerYear = 1e-6
+	if !(rate > negligibleMMPerYear) && !(bare > negligibleMMPerYear) {
 		return nil
 	}
 	lim := e.lossLimitMM
