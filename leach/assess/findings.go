@@ -21,8 +21,8 @@ func findings(r *ElementResult) []string {
 	case y == nil:
 		out = append(out, fmt.Sprintf("No water runs over the %s in the record, so it does not lose gypsum by leaching.", name))
 	default:
-		out = append(out, fmt.Sprintf("At the current rate the %s loses %s mm of surface a century (%s mm a year), so its %s mm loss limit is reached in about %s years.",
-			name, FormatFixed(r.Leaching.RecessionMMPerYear*100, 1), FormatFixed(r.Leaching.RecessionMMPerYear, 3), trimNum(lim), FormatYears(*y)))
+		out = append(out, fmt.Sprintf("At the current rate the %s loses about %s mm of surface a year, so its %s mm loss limit is reached in about %s years.",
+			name, FormatSig(r.Leaching.RecessionMMPerYear, 2), trimNum(lim), FormatYears(*y)))
 		if p10, p90 := r.Leaching.YearsToLimitP10, r.Leaching.YearsToLimitP90; p10 != nil && p90 != nil {
 			out = append(out, fmt.Sprintf("Allowing for the uncertainty of the inputs, the limit is most likely reached between %s and %s years from now (10th to 90th percentile).",
 				FormatYears(math.Min(*p10, *p90)), FormatYears(math.Max(*p10, *p90))))
@@ -59,7 +59,7 @@ func findings(r *ElementResult) []string {
 	default:
 		out = append(out, fmt.Sprintf("No mould growth is expected (mould index up to %s).", FormatFixed(m.IndexMax, 1)))
 	}
-	if m.MonthsOver80Pct > 0 {
+	if m.MonthsOver80Pct > 0 && r.Exposure == "interior" {
 		out = append(out, fmt.Sprintf("%d month(s) fail the ISO 13788 criterion of a monthly mean surface humidity at or below 80 %%.", m.MonthsOver80Pct))
 	}
 	if f := r.Frost.WetFreezeThawCyclesPerYear; f > 0 {
@@ -82,6 +82,19 @@ func FormatFixed(v float64, decimals int) string {
 		s = s[1:]
 	}
 	return s
+}
+
+// FormatSig formats v with n significant digits (at least the units),
+// the way the findings quote small rates: 0.0012, 0.73, 12.
+func FormatSig(v float64, n int) string {
+	if v == 0 || math.IsInf(v, 0) || math.IsNaN(v) {
+		return FormatFixed(v, 0)
+	}
+	d := n - 1 - int(math.Floor(math.Log10(math.Abs(v))))
+	if d < 0 {
+		d = 0
+	}
+	return FormatFixed(v, d)
 }
 
 // FormatYears formats a number of years the way a client reads it:
