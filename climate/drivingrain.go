@@ -30,8 +30,11 @@ func DrivingRainHourLPerM2(windMS, rainMM, windDirDeg, wallAzimuthDeg float64) f
 	if math.IsNaN(windMS) || math.IsNaN(rainMM) || math.IsNaN(windDirDeg) {
 		return math.NaN()
 	}
+	if rainMM <= 0 || windMS <= 0 {
+		return 0
+	}
 	c := math.Cos((windDirDeg - wallAzimuthDeg) * math.Pi / 180)
-	if c <= 0 || rainMM <= 0 || windMS <= 0 {
+	if c <= 0 {
 		return 0
 	}
 	return 2.0 / 9.0 * windMS * math.Pow(rainMM, 8.0/9.0) * c

@@ -115,6 +115,19 @@ func (m *meanAcc) mean() Float {
 // the years of rain record; the driving rain index is AirfieldIndices for
 // Orientations; the spell index needs MinSpellYears complete years.
 func Summarise(s *Series) (*Summary, error) {
+	return SummariseWith(s, SummaryOptions{SpellIndex: true})
+}
+
+// SummaryOptions choose the optional, costlier parts of a summary.
+type SummaryOptions struct {
+	// SpellIndex asks for the ISO 15927-3 spell index of every
+	// orientation (a scan of the record per orientation).
+	SpellIndex bool
+}
+
+// SummariseWith is Summarise with a choice of the optional parts; a part
+// left out is absent (null) in the summary.
+func SummariseWith(s *Series, opt SummaryOptions) (*Summary, error) {
 	if len(s.Records) == 0 {
 		return nil, errors.New("climate: " + nameOr(s.Name) + " has no records")
 	}
@@ -224,7 +237,7 @@ func Summarise(s *Series) (*Summary, error) {
 	default:
 		return nil, err
 	}
-	if sum.DrivingRain != nil {
+	if sum.DrivingRain != nil && opt.SpellIndex {
 		for _, az := range Orientations {
 			si, err := SpellIndexOf(s, az)
 			if err != nil {

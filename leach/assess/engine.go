@@ -313,7 +313,7 @@ func (p *Project) thresholds() (Thresholds, error) {
 
 // climateOut fills the climate block from a record's summary.
 func climateOut(c *ClimateOut, r *record) error {
-	sum, err := climate.Summarise(r.raw)
+	sum, err := climate.SummariseWith(r.raw, climate.SummaryOptions{})
 	if err != nil {
 		return err
 	}
