@@ -63,13 +63,23 @@ func findings(r *ElementResult) []string {
 		out = append(out, fmt.Sprintf("%d month(s) fail the ISO 13788 criterion of a monthly mean surface humidity at or below 80 %%.", m.MonthsOver80Pct))
 	}
 	if f := r.Frost.WetFreezeThawCyclesPerYear; f > 0 {
-		out = append(out, fmt.Sprintf("The wet surface freezes and thaws about %s times a year; wet gypsum keeps only about half its dry strength.", FormatFixed(f, 0)))
+		out = append(out, fmt.Sprintf("The wet surface freezes and thaws about %s times a year; wet gypsum keeps only about %.0f %% of its dry strength.", FormatFixed(f, 0), 100*wetStrengthRatio))
+	} else if r.Water.WetHoursPerYear > 0 {
+		out = append(out, fmt.Sprintf("The surface is wet for about %s hours a year; while wet, gypsum keeps only about %.0f %% of its dry strength.", FormatFixed(r.Water.WetHoursPerYear, 0), 100*wetStrengthRatio))
 	}
 	if r.Exposure == "interior" && (r.Condensation.HoursPerYear > 0 || m.IndexMax >= 1) && strings.Contains(r.Material, "board") {
 		out = append(out, "A gypsum board ceiling that gets wet can sag and fall: keep people clear of a wet or bulging ceiling and have it assessed.")
 	}
 	return out
 }
+
+// wetStrengthRatio is the strength of wet set gypsum as a fraction of its
+// dry strength: about one half. Sources: a 1954 study in the journal
+// Gypsum & Lime (J-STAGE, issue 13; abstract read: "strengths under water
+// were decreased to the half"), and Coquard & Boistelle 1994, Int. J. Rock
+// Mech. Min. Sci. 31, who report wet set gypsum at roughly 40–60 % of its
+// dry strength (from memory). Common practice quotes the same half.
+const wetStrengthRatio = 0.5
 
 // FormatFixed formats v with the given decimals; the report prints its
 // figures through the same function so text and JSON agree.
