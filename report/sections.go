@@ -403,13 +403,14 @@ func (r *reportState) methods() {
 	d.table(cols, rows, tableOpts{zebra: true})
 
 	d.heading(2, "Rating thresholds and where they come from")
-	t := r.out.Thresholds
 	tc := []column{{"Rating of", 40, "L"}, {"Moderate", 26, "R"}, {"High", 26, "R"}, {"Where the default comes from", 82, "L"}}
-	trows := [][]cell{
-		{{text: "Leaching: years to loss limit"}, {text: "below " + fmtYears(t.LeachingModerateYears)}, {text: "below " + fmtYears(t.LeachingHighYears)}, {text: "Defaults 60 and 20 years, set against the usual maintenance cycles of renders and lime or gypsum finishes (common practice, no source)."}},
-		{{text: "Dehydration: hours a year with gypsum unstable"}, {text: "from " + fmtHours(t.DehydrationModerateHours)}, {text: "from " + fmtHours(t.DehydrationHighHours)}, {text: "Defaults 1 and 50 h a year: any sustained instability is worth noting; tens of hours a year is where powdering of exposed gypsum becomes plausible (common practice, no source)."}},
-		{{text: "Condensation: hours a year at or below the dew point"}, {text: "from " + fmtHours(t.CondensationModerateHours)}, {text: "from " + fmtHours(t.CondensationHighHours)}, {text: "Defaults 100 and 500 h a year (common practice, no source)."}},
-		{{text: "Mould: highest mould index"}, {text: "from " + fmtIndex(t.MouldModerateIndex)}, {text: "from " + fmtIndex(t.MouldHighIndex)}, {text: "Defaults 1 (growth begins, microscope) and 3 (growth visible to the eye), the index's own scale (Hukka & Viitanen 1999, Wood Sci. Technol. 33)."}},
+	var trows [][]cell
+	for _, row := range r.out.Thresholds.Rows() {
+		word, f := "from ", fmtPlain
+		if row.Below {
+			word, f = "below ", fmtYears
+		}
+		trows = append(trows, []cell{{text: row.Quantity}, {text: word + f(row.Moderate)}, {text: word + f(row.High)}, {text: row.Source}})
 	}
 	d.table(tc, trows, tableOpts{})
 	d.small("Thresholds that differ from the defaults were set in the project file; the figures above are the ones this run used.")

@@ -131,3 +131,31 @@ func worse(a, b string) string {
 func (r Ratings) Worst() string {
 	return worse(worse(r.Leaching, r.Dehydration), worse(r.Condensation, r.Mould))
 }
+
+// ThresholdRow describes one rating threshold pair for people: what is
+// rated, the bounds in use, and where the defaults come from. The report
+// prints these rows, so the words live beside the numbers they explain.
+type ThresholdRow struct {
+	Quantity       string  // what is rated, with its unit
+	Moderate, High float64 // the bounds in use
+	Below          bool    // true when a smaller value is worse (years to limit)
+	Source         string  // where the default comes from
+}
+
+// Rows returns the thresholds in use, one row per rated quantity, in the
+// order of the summary table.
+func (t Thresholds) Rows() []ThresholdRow {
+	d := DefaultThresholds()
+	return []ThresholdRow{
+		{"Leaching: years to the loss limit", t.LeachingModerateYears, t.LeachingHighYears, true,
+			fmt.Sprintf("Defaults %g and %g years, set against the usual maintenance cycles of renders and lime or gypsum finishes (common practice, no source).", d.LeachingModerateYears, d.LeachingHighYears)},
+		{"Dehydration: hours a year with gypsum unstable against bassanite", t.DehydrationModerateHours, t.DehydrationHighHours, false,
+			fmt.Sprintf("Defaults %g and %g h a year: the conversion is slow at service temperatures, so only long exposure counts (common practice, no source).", d.DehydrationModerateHours, d.DehydrationHighHours)},
+		{"Dehydration: hours a year above 52 °C (the worse of the two rows rates)", t.HotModerateHours, t.HotHighHours, false,
+			fmt.Sprintf("Defaults %g and %g h a year above the 52 °C long-term limit for gypsum products (International Mechanical Code §603.5.1); the hour counts are common practice, no source.", d.HotModerateHours, d.HotHighHours)},
+		{"Condensation: hours a year below the dew point", t.CondensationModerateHours, t.CondensationHighHours, false,
+			fmt.Sprintf("Defaults %g and %g h a year (common practice, no source).", d.CondensationModerateHours, d.CondensationHighHours)},
+		{"Mould: highest VTT mould index", t.MouldModerateIndex, t.MouldHighIndex, false,
+			fmt.Sprintf("Defaults %g (growth begins, seen under the microscope) and %g (growth visible to the eye), the index's own scale (Hukka & Viitanen 1999, Wood Sci. Technol. 33). On interior surfaces a month failing the ISO 13788 criterion makes the rating at least moderate.", d.MouldModerateIndex, d.MouldHighIndex)},
+	}
+}
