@@ -52,17 +52,46 @@ func FilmSaturation(law RateLaw, tempC, filmThicknessM, contactTimeS float64) fl
 	if math.IsInf(contactTimeS, 1) {
 		return 1
 	}
-	h := filmThicknessM
-	n := law.Order
-	k1 := law.k1At(tempC)
-	kn := law.knMolPerM2S(k1)
-	g := 3 * d * ceq / h             // mol/(m²·s) per unit of u
-	hc := h * ceq                    // mol/m²
-	uSwS := 1 - law.SwitchSaturation // u_s at the switch
-	uSw := uSwS * (1 + k1/g)         // bulk u at the switch
+	sh := newFilmShape(law)
+	return sh.saturation(law.k1At(tempC), ceq, d, filmThicknessM, contactTimeS)
+}
 
-	t := contactTimeS
-	var ua float64 // u_s where the non-linear branch starts
+// filmShape holds the constants of a rate law's shape (order n and switch
+// Ωs) that the closed forms need, evaluated once.
+type filmShape struct {
+	n, uSwS       float64 // order and u_s at the switch
+	knPerK1       float64 // (1 − Ωs)^(1−n), so kn = k1·knPerK1; also u_s,switch^(1−n)
+	lnUSwS        float64
+	epsPow, lnEps float64 // at the saturation cut-off
+}
+
+// filmEps is the wall undersaturation u_s at which a film counts as
+// saturated: beyond it the saturation differs from 1 by about 10⁻⁶.
+const filmEps = 1e-6
+
+func newFilmShape(law RateLaw) filmShape {
+	s := filmShape{n: law.Order, uSwS: 1 - law.SwitchSaturation}
+	s.knPerK1 = math.Pow(s.uSwS, 1-s.n)
+	s.lnUSwS = math.Log(s.uSwS)
+	s.epsPow = math.Pow(filmEps, 1-s.n)
+	s.lnEps = math.Log(filmEps)
+	return s
+}
+
+// saturation is FilmSaturation's closed form for a surface constant k1
+// (mol/(m²·s)), saturation concentration ceq (mol/m³), diffusion
+// coefficient d (m²/s), film thickness h (m) and contact time t (s > 0),
+// with a cut-off: once the wall undersaturation would fall below 10⁻⁶ the
+// film is returned as saturated (1).
+func (s *filmShape) saturation(k1, ceq, d, h, t float64) float64 {
+	n := s.n
+	kn := k1 * s.knPerK1
+	g := 3 * d * ceq / h // mol/(m²·s) per unit of u
+	hc := h * ceq        // mol/m²
+	uSw := s.uSwS * (1 + k1/g)
+
+	// ua is u_s where the non-linear branch starts.
+	ua, uaPow, lnUa := s.uSwS, s.knPerK1, s.lnUSwS
 	if uSw < 1 {
 		lambda := k1 / ((1 + k1/g) * hc)
 		tSw := -math.Log(uSw) / lambda
@@ -70,19 +99,21 @@ func FilmSaturation(law RateLaw, tempC, filmThicknessM, contactTimeS float64) fl
 			return -math.Expm1(-lambda * t)
 		}
 		t -= tSw
-		ua = uSwS
 	} else {
 		// Transport is so slow that the wall is past the switch from the
 		// start: solve u_s + kn·u_s^n/g = 1 on (0, uSwS].
-		ua = wallUndersaturation(1, kn, n, g, uSwS)
+		ua = wallUndersaturation(1, kn, n, g, s.uSwS)
+		uaPow, lnUa = math.Pow(ua, 1-n), math.Log(ua)
+	}
+	// Saturated already? The time to reach u_s = ε is explicit.
+	if tEps := hc * ((s.epsPow-uaPow)/(kn*(n-1)) + (n/g)*(lnUa-s.lnEps)); t >= tEps {
+		return 1
 	}
 	// Newton in x = ln u_s on f(x) = t(x) − t, convex and decreasing. The
 	// start, which drops the (positive) logarithmic term, has f ≥ 0, so the
 	// iterates rise monotonically to the root without overshooting.
-	lnUa := math.Log(ua)
-	uaPow := math.Pow(ua, 1-n)
 	x := math.Log(kn*(n-1)*t/hc+uaPow) / (1 - n)
-	for iter := 0; iter < 100; iter++ {
+	for iter := 0; iter < 60; iter++ {
 		e := math.Exp((1 - n) * x)
 		f := hc*((e-uaPow)/(kn*(n-1))+(n/g)*(lnUa-x)) - t
 		fp := hc * (-e/kn - n/g)
@@ -91,12 +122,12 @@ func FilmSaturation(law RateLaw, tempC, filmThicknessM, contactTimeS float64) fl
 		if x > lnUa {
 			x = lnUa
 		}
-		if math.Abs(dx) < 1e-12*(1+math.Abs(x)) {
+		if math.Abs(dx) < 1e-10 {
 			break
 		}
 	}
 	us := math.Exp(x)
-	u := us + kn*math.Pow(us, n)/g
+	u := us + kn*us*math.Exp((n-1)*x)/g
 	return 1 - u
 }
 

@@ -15,20 +15,11 @@ import (
 // not allocate, so it suits the hour-by-hour engine, which calls it for
 // every wet hour of every element and Monte Carlo sample.
 type FilmModel struct {
+	filmShape
 	law                RateLaw
 	minC, stepC, inv   float64
 	ceq, diff, kinVisc []float64 // mol/m³, m²/s, m²/s at each node
-
-	n, uSwS       float64 // order and u_s at the switch
-	knPerK1       float64 // (1 − Ωs)^(1−n)
-	uSwSPow       float64 // u_s,switch^(1−n)
-	lnUSwS        float64
-	epsPow, lnEps float64 // at the saturation cut-off
 }
-
-// filmEps is the wall undersaturation u_s at which a film counts as
-// saturated: beyond it the saturation differs from 1 by about 10⁻⁶.
-const filmEps = 1e-6
 
 // NewFilmModel tabulates law's properties from minC to maxC (°C) in
 // steps of stepC. The range must lie inside law.Ceq's range.
@@ -55,13 +46,7 @@ func NewFilmModel(law RateLaw, minC, maxC, stepC float64) (*FilmModel, error) {
 		m.diff[i] = law.DiffusionCoefficient(t)
 		m.kinVisc[i] = WaterViscosityPaS(t) / WaterDensityKgPerM3(t)
 	}
-	m.n = law.Order
-	m.uSwS = 1 - law.SwitchSaturation
-	m.knPerK1 = math.Pow(m.uSwS, 1-m.n)
-	m.uSwSPow = m.knPerK1 // u_s,switch^(1−n) is the same number
-	m.lnUSwS = math.Log(m.uSwS)
-	m.epsPow = math.Pow(filmEps, 1-m.n)
-	m.lnEps = math.Log(filmEps)
+	m.filmShape = newFilmShape(law)
 	return m, nil
 }
 
@@ -115,49 +100,4 @@ func (m *FilmModel) Saturation(tempC, filmThicknessM, contactTimeS float64) floa
 	ceq := m.interp(m.ceq, tempC)
 	d := m.interp(m.diff, tempC)
 	return m.saturation(m.law.k1At(tempC), ceq, d, filmThicknessM, contactTimeS)
-}
-
-// saturation is FilmSaturation's closed form for a surface constant k1
-// (mol/(m²·s)), saturation concentration ceq (mol/m³), diffusion
-// coefficient d (m²/s), film thickness h (m) and contact time t (s).
-func (m *FilmModel) saturation(k1, ceq, d, h, t float64) float64 {
-	n := m.n
-	kn := k1 * m.knPerK1
-	g := 3 * d * ceq / h
-	hc := h * ceq
-	uSw := m.uSwS * (1 + k1/g)
-
-	ua, uaPow, lnUa := m.uSwS, m.uSwSPow, m.lnUSwS
-	if uSw < 1 {
-		lambda := k1 / ((1 + k1/g) * hc)
-		tSw := -math.Log(uSw) / lambda
-		if t <= tSw {
-			return -math.Expm1(-lambda * t)
-		}
-		t -= tSw
-	} else {
-		ua = wallUndersaturation(1, kn, n, g, m.uSwS)
-		uaPow, lnUa = math.Pow(ua, 1-n), math.Log(ua)
-	}
-	// Saturated already? The time to reach u_s = ε is explicit.
-	if tEps := hc * ((m.epsPow-uaPow)/(kn*(n-1)) + (n/g)*(lnUa-m.lnEps)); t >= tEps {
-		return 1
-	}
-	x := math.Log(kn*(n-1)*t/hc+uaPow) / (1 - n)
-	for iter := 0; iter < 60; iter++ {
-		e := math.Exp((1 - n) * x)
-		f := hc*((e-uaPow)/(kn*(n-1))+(n/g)*(lnUa-x)) - t
-		fp := hc * (-e/kn - n/g)
-		dx := f / fp
-		x -= dx
-		if x > lnUa {
-			x = lnUa
-		}
-		if math.Abs(dx) < 1e-10 {
-			break
-		}
-	}
-	us := math.Exp(x)
-	u := us + kn*us*math.Exp((n-1)*x)/g
-	return 1 - u
 }
