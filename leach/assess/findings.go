@@ -60,7 +60,11 @@ func findings(r *ElementResult) []string {
 		out = append(out, fmt.Sprintf("No mould growth is expected (mould index up to %s).", FormatFixed(m.IndexMax, 1)))
 	}
 	if m.MonthsOver80Pct > 0 && r.Exposure == "interior" {
-		out = append(out, fmt.Sprintf("%d month(s) fail the ISO 13788 criterion of a monthly mean surface humidity at or below 80 %%.", m.MonthsOver80Pct))
+		s := fmt.Sprintf("%d of the record's months fail the ISO 13788 criterion (monthly mean surface humidity at most 80 %%)", m.MonthsOver80Pct)
+		if m.IndexMax < 1 {
+			s += ", so the mould rating is raised to moderate although no growth has started yet: the surface is damp enough for long enough that mould is a matter of time or of a more sensitive finish"
+		}
+		out = append(out, s+".")
 	}
 	if f := r.Frost.WetFreezeThawCyclesPerYear; f > 0 {
 		out = append(out, fmt.Sprintf("The wet surface freezes and thaws about %s times a year; wet gypsum keeps only about %.0f %% of its dry strength.", FormatFixed(f, 0), 100*wetStrengthRatio))
