@@ -4,8 +4,8 @@ import "math"
 
 // interpDB interpolates a row of the database's activity table linearly in
 // temperature, as between the tabulated points of
-// LLNL_AQUEOUS_MODEL_PARAMETERS. Below the first point (0.01 °C) the first
-// segment is extended, which changes nothing that matters at 0 °C.
+// LLNL_AQUEOUS_MODEL_PARAMETERS. The table starts at 0 °C (MinTempC), so
+// no extrapolation is needed inside the package's range.
 func interpDB(row *[8]float64, tempC float64) float64 {
 	i := 0
 	for i < len(dbTempsC)-2 && tempC > dbTempsC[i+1] {
@@ -18,9 +18,9 @@ func interpDB(row *[8]float64, tempC float64) float64 {
 
 // DebyeHuckelA returns the Debye–Hückel limiting-law parameter A
 // (kg^½·mol^-½) of the pinned database at tempC, interpolated linearly
-// between its tabulated temperatures (0.01, 25, 60, 100, 150, … °C;
-// 0.5114 at 25 °C). Valid for MinTempC ≤ tempC ≤ MaxTempC; NaN outside.
-// Source: llnl.dat, LLNL_AQUEOUS_MODEL_PARAMETERS -dh_a.
+// between its tabulated temperatures (0, 25, 60, 100, 150, … °C; 0.5095
+// at 25 °C). Valid for MinTempC ≤ tempC ≤ MaxTempC; NaN outside.
+// Source: Thermoddem V1.10, LLNL_AQUEOUS_MODEL_PARAMETERS -dh_a.
 func DebyeHuckelA(tempC float64) float64 {
 	if !inRange(tempC) {
 		return math.NaN()
@@ -29,8 +29,8 @@ func DebyeHuckelA(tempC float64) float64 {
 }
 
 // DebyeHuckelB returns the Debye–Hückel parameter B (kg^½·mol^-½·Å^-1) of
-// the pinned database at tempC (0.3288 at 25 °C), interpolated as
-// DebyeHuckelA. Source: llnl.dat, -dh_b.
+// the pinned database at tempC (0.3284 at 25 °C), interpolated as
+// DebyeHuckelA. Source: Thermoddem V1.10, -dh_b.
 func DebyeHuckelB(tempC float64) float64 {
 	if !inRange(tempC) {
 		return math.NaN()
@@ -39,8 +39,8 @@ func DebyeHuckelB(tempC float64) float64 {
 }
 
 // Bdot returns the B-dot parameter Ḃ (kg/mol) of the pinned database at
-// tempC (0.041 at 25 °C), interpolated as DebyeHuckelA. Source: llnl.dat,
-// -bdot.
+// tempC (0.041 at 25 °C), interpolated as DebyeHuckelA. Source:
+// Thermoddem V1.10, -bdot.
 func Bdot(tempC float64) float64 {
 	if !inRange(tempC) {
 		return math.NaN()
@@ -56,8 +56,10 @@ func Bdot(tempC float64) float64 {
 //
 // with A, B, Ḃ from DebyeHuckelA, DebyeHuckelB and Bdot. Neutral species
 // (z = 0) get log10 γ = 0. The equation is used to I ≈ 1 mol/kg; beyond
-// that it is outside its calibration. Source: the activity model of llnl.dat (PHREEQC -llnl_gamma), after
-// Helgeson 1969, Am. J. Sci. 267, 729 (citation from memory).
+// that it is outside its calibration. Source: the activity model of
+// Thermoddem V1.10 in PHREEQC format (LLNL_AQUEOUS_MODEL_PARAMETERS with
+// per-species -llnl_gamma), after Helgeson 1969, Am. J. Sci. 267, 729
+// (citation from memory).
 func LogGamma(z, ionSizeAngstrom, ionicStrengthMol, tempC float64) float64 {
 	if z == 0 {
 		return 0

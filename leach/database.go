@@ -6,14 +6,15 @@ import "fmt"
 // activity-model parameter in this package is copied from this one file.
 const (
 	// DatabaseName names the database in outputs (JSON, PDF).
-	DatabaseName = "llnl.dat (USGS PHREEQC distribution; LLNL thermo.com.V8.R6.230)"
+	DatabaseName = "Thermoddem V1.10 (BRGM), PHREEQC format, USGS PHREEQC distribution"
 
 	// DatabaseVersion identifies the exact file the constants were read from:
-	// the file's $Id line and the git commit of the copy that was read.
-	DatabaseVersion = "llnl.dat $Id 12758 2017-08-01, reformatted 2024-05-17 (md5 efbcb7244fbe9063e0020cf5d1e00458), usgs-coupled/phreeqc3 commit 9d08ff54a75b25c3e89c655a43af0509e8199935"
+	// its name, the BDD date and converter of its header, and the git commit
+	// of the copy that was read.
+	DatabaseVersion = "PHREEQC_ThermoddemV1.10_15Dec2020.dat (BDD date 12/15/2020, converted by ThermoBridge 1.0.3.4), usgs-coupled/phreeqc3 commit 1685c9d775fd51828eb4da7d1e1278188894ee68"
 
 	// DatabaseSource is where the file can be read.
-	DatabaseSource = "https://github.com/usgs-coupled/phreeqc3/blob/9d08ff54a75b25c3e89c655a43af0509e8199935/database/llnl.dat"
+	DatabaseSource = "https://github.com/usgs-coupled/phreeqc3/blob/1685c9d775fd51828eb4da7d1e1278188894ee68/database/PHREEQC_ThermoddemV1.10_15Dec2020.dat"
 )
 
 // Database returns the database name and version as one line, the form in
@@ -21,11 +22,9 @@ const (
 func Database() string { return DatabaseName + ", " + DatabaseVersion }
 
 // Temperature range over which the package answers, °C. The database's
-// analytic expressions and activity table cover 0.01–300 °C (above 100 °C
-// along the liquid–vapour saturation curve), but the water density and
+// activity table is tabulated from 0 to 300 °C, but the water density and
 // viscosity correlations used for concentrations and transport hold only to
-// 150 °C, so the package stops there. 0 °C is treated as the database's
-// 0.01 °C point.
+// 150 °C, so the package stops there.
 const (
 	MinTempC = 0.0
 	MaxTempC = 150.0
@@ -95,29 +94,30 @@ func (p Phase) MolarMassGPerMol() float64 {
 	return MolarMassCaSO4 + p.WaterMoles()*MolarMassH2O
 }
 
-// analytic holds the coefficients of the database's analytic expression
+// analytic holds the coefficients of the database's -analytic expression
 //
 //	log10 K = A1 + A2·T + A3/T + A4·log10(T) + A5/T²,   T in K
 //
-// with the file's 25 °C log_k and delta_H kept beside them for checking.
+// with the file's 25 °C log_k and delta_h (kJ/mol) kept beside them for
+// checking.
 type analytic struct {
 	a1, a2, a3, a4, a5 float64
 	logK25             float64 // the file's log_k
-	deltaHKJPerMol     float64 // the file's -delta_H
+	deltaHKJPerMol     float64 // the file's delta_h
 }
 
-// Reactions as written in llnl.dat, PHASES and SOLUTION_SPECIES blocks
-// (all "-Range: 0-300"):
+// Reactions as written in the Thermoddem V1.10 file, PHASES and
+// SOLUTION_SPECIES blocks:
 //
 //	Gypsum     CaSO4:2H2O   = Ca+2 + SO4-2 + 2 H2O
-//	Bassanite  CaSO4:0.5H2O = 0.5 H2O + Ca+2 + SO4-2
+//	Bassanite  CaSO4:0.5H2O = Ca+2 + SO4-2 + 0.5 H2O
 //	Anhydrite  CaSO4        = Ca+2 + SO4-2
-//	CaSO4(aq)  SO4-2 + Ca+2 = CaSO4
+//	CaSO4(aq)  Ca+2 + SO4-2 = CaSO4
 var (
-	dbGypsum    = analytic{-2.4417e+2, -8.3329e-2, 5.5958e+3, 9.9301e+1, 8.7389e+1, -4.4823, -1.66746}
-	dbBassanite = analytic{-2.201e+2, -8.023e-2, 5.5092e+3, 8.9651e+1, 8.6031e+1, -3.6615, -18.711}
-	dbAnhydrite = analytic{-2.0986e+2, -7.8823e-2, 5.0969e+3, 8.5642e+1, 7.9594e+1, -4.3064, -18.577}
-	dbIonPair   = analytic{2.8618e+2, 8.4084e-2, -7.688e+3, -1.1449e+2, -1.2005e+2, 2.1111, 5.4392}
+	dbGypsum    = analytic{-1.620207e+3, -2.5723367e-1, 8.9150211e+4, 5.8738246e+2, -5.3473276e+6, -4.605, -1.054}
+	dbBassanite = analytic{-1.5834316e+3, -2.5347761e-1, 8.8114917e+4, 5.7346485e+2, -5.2850565e+6, -3.919, -17.357}
+	dbAnhydrite = analytic{-1.6180709e+3, -2.6204311e-1, 8.9584938e+4, 5.866302e+2, -5.3589079e+6, -4.436, -17.940}
+	dbIonPair   = analytic{1.720334e+3, 2.6573378e-1, -9.4254922e+4, -6.2356103e+2, 5.4972745e+6, 2.310, 4.291}
 )
 
 func (p Phase) coefficients() *analytic {
@@ -136,15 +136,15 @@ func (p Phase) coefficients() *analytic {
 // (kg^½/mol^½) and B (kg^½/(mol^½·Å)) and the B-dot parameter (kg/mol),
 // tabulated at these temperatures (°C).
 var (
-	dbTempsC = [...]float64{0.01, 25, 60, 100, 150, 200, 250, 300}
-	dbDHA    = [...]float64{0.4939, 0.5114, 0.5465, 0.5995, 0.6855, 0.7994, 0.9593, 1.218}
-	dbDHB    = [...]float64{0.3253, 0.3288, 0.3346, 0.3421, 0.3525, 0.3639, 0.3766, 0.3925}
-	dbBdot   = [...]float64{0.0374, 0.041, 0.0438, 0.046, 0.047, 0.047, 0.034, 0}
+	dbTempsC = [...]float64{0, 25, 60, 100, 150, 200, 250, 300}
+	dbDHA    = [...]float64{0.4901, 0.5095, 0.5450, 0.5986, 0.6867, 0.8046, 0.9710, 1.2414}
+	dbDHB    = [...]float64{0.3245, 0.3284, 0.3343, 0.3420, 0.3528, 0.3647, 0.3782, 0.3950}
+	dbBdot   = [...]float64{0.0374, 0.0410, 0.0438, 0.0460, 0.0470, 0.0470, 0.0340, 0}
 )
 
-// Ion-size parameters å (Å), the -llnl_gamma of each species in llnl.dat.
-// CaSO4(aq) is neutral; the B-dot model gives it unit activity
-// coefficient.
+// Ion-size parameters å (Å), the -llnl_gamma of each species in the
+// Thermoddem V1.10 file. CaSO4(aq) is neutral (its -llnl_gamma of 3.4 does
+// not enter): the B-dot model gives it unit activity coefficient.
 const (
 	ionSizeCaAngstrom  = 6 // Ca+2
 	ionSizeSO4Angstrom = 4 // SO4-2

@@ -9,29 +9,36 @@
 //
 // # One database
 //
-// Every constant comes from one file, llnl.dat of the USGS PHREEQC
-// distribution (see DatabaseName, DatabaseVersion and DatabaseSource), so
-// solubility and dehydration can never disagree with each other: the
-// dehydration free energy is formed from the same log K that fix the
-// solubilities. The file's analytic log K(T) expressions are used, as
-// PHREEQC uses them (an analytic expression takes precedence over log_k and
-// delta_h). They are fits to the LLNL grid from 0 to 300 °C and do not
-// reproduce the file's own 25 °C log_k exactly: they differ by 0.04 to 0.05
-// log units for all four reactions (see the tests). The activity model is
-// the database's B-dot (extended Debye–Hückel) model with its tabulated A(T),
-// B(T) and Ḃ(T) and ion sizes.
+// Every constant comes from one file, Thermoddem V1.10 of BRGM in the
+// PHREEQC format shipped with the USGS PHREEQC distribution (see
+// DatabaseName, DatabaseVersion and DatabaseSource), so solubility and
+// dehydration can never disagree with each other: the dehydration free
+// energy is formed from the same log K that fix the solubilities. The
+// file's analytic log K(T) expressions are used, as PHREEQC uses them (an
+// analytic expression takes precedence over log_k and delta_h). They pass
+// through the file's own 25 °C log_k to 0.001 log units for all four
+// reactions; their slope at 25 °C gives reaction enthalpies 0.6–0.7 kJ/mol
+// below the file's delta_h (see the tests). The activity model is the
+// database's B-dot (extended Debye–Hückel) model with its tabulated A(T),
+// B(T) and Ḃ(T) from 0 °C and its ion sizes. The file gives no molar
+// volumes; those come from the sources named at MolarVolumeCm3.
 //
 // # Known limits of the database
 //
-// llnl.dat puts the gypsum–anhydrite equilibrium in liquid water at about
-// 44 °C, inside the published spread (38–42 °C from solubility measurements,
-// 58 ± 2 °C from Hardie 1967, Am. Mineral. 52, 171). It puts the
-// gypsum–bassanite equilibrium in liquid water at about 125 °C, some 25 K
-// above the 99 °C that Power, Fabuss & Satterfield measured for
-// α-hemihydrate (J. Chem. Eng. Data, 1964). Bassanite is therefore
-// predicted to form at higher temperature or drier air than it really does:
-// for dehydration risk the database is on the unsafe side, and the tests
-// record this bias rather than hide it.
+// Thermoddem V1.10 reproduces the handbook solubility of gypsum within 3 %
+// from 0 to 25 °C and within 5 % up to 60 °C, the range of the water on
+// building surfaces where leaching happens. From 70 to 100 °C it is low by
+// 6 to 11 %. It puts the gypsum–bassanite equilibrium in liquid water at
+// about 107.5 °C, inside the 100–120 °C the trade gives (common practice,
+// no source) but some 8.5 K above the 99 °C that Power, Fabuss & Satterfield
+// measured for α-hemihydrate (J. Chem. Eng. Data, 1964, from memory):
+// bassanite is predicted to form at a slightly higher temperature than it
+// really does, so for dehydration in liquid water the database is still a
+// little on the unsafe side. It puts the gypsum–anhydrite equilibrium in
+// liquid water at about 42 °C, inside the published spread (38–42 °C from
+// solubility measurements, 58 ± 2 °C from Hardie 1967, Am. Mineral. 52,
+// 171), but at 23 °C at a water activity of 0.805, against Hardie's
+// measured 0.770. The tests record these gaps and fail if they grow.
 //
 // # Kinetics
 //

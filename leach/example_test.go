@@ -23,9 +23,9 @@ func Example() {
 	f := leach.FilmSaturation(law, 10, 0.1e-3, 60) // 0.1 mm film, one minute
 	fmt.Printf("0.1 mm film after 60 s at 10 °C: %.0f %% saturated, %.2f g/L\n", 100*f, f*tab.At(10))
 	// Output:
-	// gypsum at 25 °C: 15.7 mmol/kg, 2.69 g/L
-	// gypsum–bassanite equilibrium at 25 °C: 28 % RH
-	// gypsum–anhydrite in liquid water: 44 °C
+	// gypsum at 25 °C: 15.2 mmol/kg, 2.60 g/L
+	// gypsum–bassanite equilibrium at 25 °C: 35 % RH
+	// gypsum–anhydrite in liquid water: 42 °C
 	// anhydrite → gypsum: +63 % solid volume
-	// 0.1 mm film after 60 s at 10 °C: 98 % saturated, 2.60 g/L
+	// 0.1 mm film after 60 s at 10 °C: 98 % saturated, 2.42 g/L
 }

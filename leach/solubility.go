@@ -59,9 +59,10 @@ const waterActivityFactor = 0.017
 //	a_w = 1 − 0.017·(2m + m_IP + 2·I_bg)
 //
 // for the free-ion molality m by a bracketed solve in ln m, with K_p from
-// LogK, K_IP from LogKIonPair and the activity model from LogGamma (ion sizes
-// 6 Å for Ca+2 and 4 Å for SO4-2, llnl.dat). ν is the hydrate water of the
-// phase (2, 0.5, 0). The background salt is taken as inert and 1:1.
+// LogK, K_IP from LogKIonPair and the activity model from LogGamma (ion
+// sizes 6 Å for Ca+2 and 4 Å for SO4-2, Thermoddem V1.10). ν is the
+// hydrate water of the phase (2, 0.5, 0). The background salt is taken as
+// inert and 1:1.
 //
 // Valid for MinTempC ≤ tempC ≤ MaxTempC and 0 ≤ ionicStrengthMol ≤
 // MaxIonicStrengthMol; other arguments return a *RangeError. Bassanite and

@@ -13,8 +13,8 @@ import "math"
 //	                   Publishing, "Bassanite", 2001–2005; calculated
 //	                   density 2.731 g/cm³ there)
 //
-// The pinned database, llnl.dat, carries no molar volumes. NaN for an
-// unknown phase.
+// The pinned database, Thermoddem V1.10 in PHREEQC format, carries no
+// molar volumes (no -Vm). NaN for an unknown phase.
 func MolarVolumeCm3(p Phase) float64 {
 	switch p {
 	case Gypsum:

@@ -3,8 +3,11 @@ package main
 import (
 	"bytes"
 	"encoding/json"
+	"fmt"
 	"strings"
 	"testing"
+
+	"github.com/gyprisk/gyprisk/leach"
 )
 
 func TestChemJSONContract(t *testing.T) {
@@ -42,11 +45,11 @@ func TestChemJSONContract(t *testing.T) {
 	sub("transition_c", "bassanite", "anhydrite")
 	sub("dg_j_per_mol", "bassanite", "anhydrite")
 	sub("solid_volume_change_pct", "anhydrite_to_gypsum", "bassanite_to_gypsum")
-	if !strings.Contains(m["database"].(string), "llnl.dat") {
+	if !strings.Contains(m["database"].(string), "Thermoddem V1.10") {
 		t.Errorf("database = %v", m["database"])
 	}
 	// Gypsum at 25 °C: 15.2–15.5 mmol/kg in handbooks (CRC, from memory);
-	// the pinned database gives 15.7. Checked loosely here, strictly in leach.
+	// the pinned database gives 15.2. Checked loosely here, strictly in leach.
 	g := m["solubility_mmol_per_kg"].(map[string]any)["gypsum"].(float64)
 	if g < 14.5 || g > 16.5 {
 		t.Errorf("gypsum solubility %g mmol/kg", g)
@@ -61,9 +64,48 @@ func TestChemTable(t *testing.T) {
 	if err := run([]string{"chem", "--temp", "35", "--rh", "40"}, &out, &errb); err != nil {
 		t.Fatal(err)
 	}
-	for _, w := range []string{"gypsum → bassanite", "kinetically hindered", "Database: llnl.dat", "mmol/kg", "g/L"} {
+	for _, w := range []string{"gypsum → bassanite", "kinetically hindered", "Database: Thermoddem V1.10", "mmol/kg", "g/L"} {
 		if !strings.Contains(out.String(), w) {
 			t.Errorf("table lacks %q:\n%s", w, out.String())
+		}
+	}
+}
+
+// TestChemNotesMatchDatabase keeps the figures quoted in the notes about
+// the database's known limits in step with what the package computes.
+func TestChemNotesMatchDatabase(t *testing.T) {
+	notes := strings.Join(chemNotes, "\n")
+	tb, err := leach.TransitionC(leach.Bassanite, 100)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rhAnh := leach.EquilibriumRHPct(leach.Anhydrite, 23)
+	for _, want := range []string{
+		fmt.Sprintf("near %.1f °C", tb),
+		fmt.Sprintf("about %.1f K above the measured 99 °C", tb-99), // Power, Fabuss & Satterfield 1964 (from memory)
+		fmt.Sprintf("at 23 °C at %.1f %% RH", rhAnh),
+		"against 77 % measured (Hardie 1967)", // Hardie 1967, Am. Mineral. 52: a_w 0.770 at 23 °C
+	} {
+		if !strings.Contains(notes, want) {
+			t.Errorf("notes lack %q:\n%s", want, notes)
+		}
+	}
+	// The solubility figures of the note, against the handbook (CRC,
+	// "Aqueous solubility of inorganic compounds", mass % CaSO4, from
+	// memory): within 5 % at 0–60 °C, 6–11 % low at 70–100 °C (rounded).
+	for _, r := range []struct {
+		tempC, massPct, lo, hi float64
+	}{
+		{0, 0.174, -5, 5}, {25, 0.205, -5, 5}, {60, 0.201, -5, 5}, // CRC (from memory)
+		{70, 0.193, -6.5, -5.5}, {100, 0.163, -11.5, -10.5}, // CRC (from memory)
+	} {
+		s, err := leach.Solubility(leach.Gypsum, r.tempC, 0)
+		if err != nil {
+			t.Fatal(err)
+		}
+		want := 1e6 * r.massPct / (leach.MolarMassCaSO4 * (100 - r.massPct))
+		if rel := 100 * (s.MmolPerKg/want - 1); rel < r.lo || rel > r.hi {
+			t.Errorf("gypsum %g °C: %+.1f %% against the handbook, the note says %g to %g %%", r.tempC, rel, r.lo, r.hi)
 		}
 	}
 }
