@@ -133,7 +133,9 @@ func (t *FilmTable) SaturationLn(lt, ld float64) float64 {
 	if lnU <= filmTableLnUFloor {
 		return 1
 	}
-	return -math.Expm1(lnU)
+	// 1 − e^lnU with the assembly exp: Expm1's extra precision near
+	// lnU = 0 (saturation near 0) is far below the table's own error.
+	return 1 - math.Exp(lnU)
 }
 
 // LnProperties returns ln k1 (mol/(m²·s)), ln c_eq (mol/m³) and ln D

@@ -114,6 +114,12 @@ type mcPlan struct {
 //	δ   = δ0·ρ^(1/3)·f_δ,  t_c = min(L·δ0/q0 · ρ^(−2/3)·f_t, Δt),  ρ = water/water0
 //
 // (Nusselt: δ ∝ q^(1/3), so the film speed q/δ ∝ ρ^(2/3)).
+// mcSaturatedWithin: an hour whose film is within this of saturation at
+// the least favourable corner of the sampled ranges is summed once as
+// saturated; the error this makes in any sample is below 0.01 % of the
+// hour's dissolved mass, far inside the sampled spreads.
+const mcSaturatedWithin = 1e-4
+
 type mcHour struct {
 	driven, runoff, rain, cond float64 // L/m² (after a repellent)
 	dTdAlpha                   float64
@@ -143,7 +149,7 @@ func (r *elementRun) plan() *mcPlan {
 		// The wettest and slowest corner of the sampled ranges.
 		wMax := (w.drivenL+w.runoffL)*unrep*(1+mcWallHalfWidth) + w.rainL*unrep + w.condL
 		tMin := w.tempC - mcAbsorptanceHalfWidth*w.dTdAlpha
-		if filmSat(slowest, wMax, tMin, w.slopeDeg, w.flowRunM, w.dtS, mcFilmFactor, 1/mcFilmFactor) >= 1-1e-6 {
+		if filmSat(slowest, wMax, tMin, w.slopeDeg, w.flowRunM, w.dtS, mcFilmFactor, 1/mcFilmFactor) >= 1-mcSaturatedWithin {
 			ceq := r.chem.sol.At(clampChem(w.tempC))
 			slope := (r.chem.sol.At(clampChem(w.tempC+0.05)) - r.chem.sol.At(clampChem(w.tempC-0.05))) / 0.1
 			for j, p := range parts {
@@ -189,6 +195,19 @@ func (r *elementRun) sampleRecession(pl *mcPlan, v *[numMC]float64) (rec, bare f
 	g := sol * ((part(0)+part(1))*wf + part(2) + part(3))
 	gBare := sol * ((part(0)+part(1))*unrep*wf + part(2)*unrep + part(3))
 	s := sampleLogs{lnRate: math.Log(v[mcRateConst]), lnThick: math.Log(v[mcFilmThick]), lnContact: math.Log(v[mcContact])}
+	lnWf := math.Log(wf)
+	// lnRatio is ln(water/water0) for the water a·f + b of this sample,
+	// without a logarithm where the hour's water is all of one kind.
+	lnRatio := func(h *mcHour, a, b, lnF float64) float64 {
+		switch {
+		case h.rain+h.cond == 0:
+			return lnF
+		case h.driven+h.runoff == 0 && b == h.water0:
+			return 0
+		}
+		return math.Log((a + b) / h.water0)
+	}
+	lnUnrepWf := math.Log(unrep * wf)
 	for k := range pl.hours {
 		h := &pl.hours[k]
 		dT := dAlpha * h.dTdAlpha
@@ -196,11 +215,13 @@ func (r *elementRun) sampleRecession(pl *mcPlan, v *[numMC]float64) (rec, bare f
 			continue
 		}
 		ceq := (h.ceq + h.ceqSlope*dT) * sol
-		water := (h.driven+h.runoff)*wf + h.rain + h.cond
-		g += water * ceq * pl.sampleSat(h, &s, water, dT) * h.wdt
+		a := (h.driven + h.runoff) * wf
+		water := a + h.rain + h.cond
+		g += water * ceq * pl.sampleSat(h, &s, lnRatio(h, a, h.rain+h.cond, lnWf), dT) * h.wdt
 		if unrep != 1 {
-			wb := (h.driven+h.runoff)*unrep*wf + h.rain*unrep + h.cond
-			gBare += wb * ceq * pl.sampleSat(h, &s, wb, dT) * h.wdt
+			ab := (h.driven + h.runoff) * unrep * wf
+			bb := h.rain*unrep + h.cond
+			gBare += (ab + bb) * ceq * pl.sampleSat(h, &s, lnRatio(h, ab, bb, lnUnrepWf), dT) * h.wdt
 		}
 	}
 	mmPerG := 1 / (e.bulkDensityKgM3 * v[mcDensity] * e.gypsumFrac)
@@ -216,9 +237,9 @@ func (r *elementRun) sampleRecession(pl *mcPlan, v *[numMC]float64) (rec, bare f
 type sampleLogs struct{ lnRate, lnThick, lnContact float64 }
 
 // sampleSat is the film saturation of one hour in one sample, for the
-// sample's water (L/m²) and surface temperature shift dT (K).
-func (pl *mcPlan) sampleSat(h *mcHour, s *sampleLogs, water, dT float64) float64 {
-	lnRho := math.Log(water / h.water0)
+// sample's water (as lnRho = ln(water/water0)) and surface temperature
+// shift dT (K).
+func (pl *mcPlan) sampleSat(h *mcHour, s *sampleLogs, lnRho, dT float64) float64 {
 	lnDelta := h.lnDelta0 + lnRho/3 + s.lnThick
 	lnContact := math.Min(h.lnContact0-2*lnRho/3+s.lnContact, h.lnDt)
 	lnK1 := h.lnK1 + s.lnRate

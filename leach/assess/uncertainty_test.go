@@ -94,3 +94,44 @@ func TestScenarioAndVariantShape(t *testing.T) {
 		t.Errorf("results %q, want %q", got, want)
 	}
 }
+
+// TestNullSampleMatchesDeterministic: a sample whose every input sits at
+// its default reproduces the deterministic recession through the Monte
+// Carlo plan (saturated hours summed once, the rest through the film
+// table), to within the table's interpolation error; with a repellent
+// finish both the finished and the bare rates agree.
+func TestNullSampleMatchesDeterministic(t *testing.T) {
+	rows := synthYear(24*120, 7, 1.5)
+	proj := wallProject + "runoff_height_m = 3\n\n[[element.variant]]\nid = \"finish\"\nrepellent_fraction = 0.6\n\n[[element.variant]]\nid = \"top\"\ntilt_deg = 20\n"
+	p := testProject(t, proj, map[string]string{"c.csv": csvRecord(testStart, rows)})
+	rec, err := p.loadRecord(p.Site.Climate, roleOutdoor)
+	if err != nil {
+		t.Fatal(err)
+	}
+	st, _ := p.site()
+	sh, err := newSiteHours(st, rec.hourly, rec.hourly.Records)
+	if err != nil {
+		t.Fatal(err)
+	}
+	chem, _ := newChemistry()
+	null := [numMC]float64{mcSolubility: 1, mcRateConst: 1, mcFilmThick: 1, mcContact: 1, mcWallFactor: 1, mcDensity: 1, mcAbsorptance: 0}
+	for _, v := range []*ElementSpec{nil, &p.Elements[0].Variants[0], &p.Elements[0].Variants[1]} {
+		e, err := resolve(&p.Elements[0], v)
+		if err != nil {
+			t.Fatal(err)
+		}
+		r, err := assessElement(e, sh, nil, chem, true)
+		if err != nil {
+			t.Fatal(err)
+		}
+		res := r.result("present")
+		got, bare := r.sampleRecession(r.plan(), &null)
+		want := res.Leaching.RecessionMMPerYear
+		if !within(got, want, 2e-3*want) {
+			t.Errorf("%s: null sample %.6f mm/yr, deterministic %.6f", e.variant, got, want)
+		}
+		if wantBare := r.bareRecession(want); !within(bare, wantBare, 5e-3*wantBare) {
+			t.Errorf("%s: null sample bare %.6f mm/yr, deterministic %.6f", e.variant, bare, wantBare)
+		}
+	}
+}
