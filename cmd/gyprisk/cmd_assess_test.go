@@ -195,3 +195,25 @@ func TestAssessHourlyTrace(t *testing.T) {
 		}
 	}
 }
+
+// TestAssessSummaryGolden pins the summary table of the demo project
+// (invented data) so that a change to any figure is seen and reviewed:
+// regenerate with go test ./cmd/gyprisk -run AssessSummaryGolden -update.
+func TestAssessSummaryGolden(t *testing.T) {
+	out, errOut, code := runCmd("assess", "../../examples/demo/project.toml", "--samples", "0", "-q")
+	if code != 0 {
+		t.Fatalf("exit %d: %s", code, errOut)
+	}
+	path := filepath.Join("testdata", "assess", "demo-summary.golden")
+	if updating() {
+		must(t, os.MkdirAll(filepath.Dir(path), 0o755))
+		must(t, os.WriteFile(path, []byte(out), 0o644))
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if out != string(want) {
+		t.Errorf("summary differs from %s; run with -update and read the diff\n--- got\n%s", path, out)
+	}
+}
