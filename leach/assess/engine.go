@@ -33,7 +33,7 @@ type Options struct {
 }
 
 // Run assesses every element, variant and scenario of the project.
-func Run(p *Project, opt Options) (*Output, error) {
+func Run(p *Project, opt Options) (retOut *Output, retErr error) {
 	out := &Output{
 		Tool:     Tool{Name: "gyprisk", Version: opt.ToolVersion},
 		RunDate:  opt.Now.UTC().Format(time.RFC3339),
@@ -103,9 +103,15 @@ func Run(p *Project, opt Options) (*Output, error) {
 		}
 		out.Inputs = append(out.Inputs, outdoor.input)
 		out.Notes = append(out.Notes, recordNotes(outdoor)...)
-		if err := climateOut(&out.Climate, outdoor); err != nil {
-			return nil, err
-		}
+		// The climate summary is needed only for the output: make it beside
+		// the assessment.
+		climateDone := make(chan error, 1)
+		go func() { climateDone <- climateOut(&out.Climate, outdoor) }()
+		defer func() {
+			if err := <-climateDone; err != nil && retErr == nil {
+				retOut, retErr = nil, err
+			}
+		}()
 	}
 	rooms := map[string]*record{}
 	for _, e := range cases {

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 	"path/filepath"
+	"runtime"
+	"sync"
 	"time"
 
 	"github.com/gyprisk/gyprisk/climate"
@@ -94,27 +96,50 @@ func newSiteHours(st *site, s *climate.Series, recs []climate.Record) (*siteHour
 	sh.windSin = make([]float64, n)
 	sh.skyTempC = make([]float64, n)
 	sh.sky = make([]solar.Sky, n)
+	// The sun and sky of each hour are independent of the others: split
+	// them over the cores. The cloud estimate carries from hour to hour,
+	// so the sky temperatures follow in one pass.
+	parallelChunks(n, func(lo, hi int) {
+		for i := lo; i < hi; i++ {
+			r := &recs[i]
+			dir := r.WindDirDeg
+			if math.IsNaN(dir) {
+				dir = 0
+			}
+			sh.drBase[i] = climate.DrivingRainHourLPerM2(sh.windMS[i], sh.rainMM[i], dir, dir) * sh.dtS[i] / 3600
+			sh.windSin[i], sh.windCos[i] = math.Sincos(dir * math.Pi / 180)
+
+			mid := solar.IntervalMidpoint(r.Time, time.Duration(sh.dtS[i]*float64(time.Second)))
+			sun := solar.At(mid, st.latDeg, st.lonDeg)
+			ghi := r.SolarWM2
+			if math.IsNaN(ghi) {
+				ghi = 0
+			}
+			sh.sky[i] = solar.NewSky(sun, ghi, solar.ExtraterrestrialNormalWM2(mid))
+		}
+	})
 	var clouds surface.CloudEstimator
 	for i := range recs {
-		r := &recs[i]
-		dir := r.WindDirDeg
-		if math.IsNaN(dir) {
-			dir = 0
-		}
-		sh.drBase[i] = climate.DrivingRainHourLPerM2(sh.windMS[i], sh.rainMM[i], dir, dir) * sh.dtS[i] / 3600
-		sh.windSin[i], sh.windCos[i] = math.Sincos(dir * math.Pi / 180)
-
-		mid := solar.IntervalMidpoint(r.Time, time.Duration(sh.dtS[i]*float64(time.Second)))
-		sun := solar.At(mid, st.latDeg, st.lonDeg)
-		ghi := r.SolarWM2
-		if math.IsNaN(ghi) {
-			ghi = 0
-		}
-		sh.sky[i] = solar.NewSky(sun, ghi, solar.ExtraterrestrialNormalWM2(mid))
-		cloud := clouds.Update(ghi, sun.ZenithDeg, sh.rainMM[i])
+		cloud := clouds.Update(sh.sky[i].GHIWM2, sh.sky[i].ZenithDeg, sh.rainMM[i])
 		sh.skyTempC[i] = surface.SkyTemperatureFromAirC(sh.tempC[i], sh.vapPa[i], cloud)
 	}
 	return sh, nil
+}
+
+// parallelChunks calls fn on contiguous chunks [lo, hi) of 0…n, one per
+// core, and waits for them.
+func parallelChunks(n int, fn func(lo, hi int)) {
+	k := min(runtime.GOMAXPROCS(0), max(1, n/4096))
+	var wg sync.WaitGroup
+	for c := range k {
+		lo, hi := c*n/k, (c+1)*n/k
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			fn(lo, hi)
+		}()
+	}
+	wg.Wait()
 }
 
 // newRoomHours precomputes a room record's hours (no sun, rain or wind).
