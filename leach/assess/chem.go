@@ -66,14 +66,12 @@ func lnAwEq(tab []float64, tempC float64) float64 {
 	return tab[i] + f*(tab[i+1]-tab[i])
 }
 
-// deltaG returns ΔG (J/mol) of gypsum → phase at the surface, from the
-// tabulated equilibrium water activity; nu is the water released.
-func deltaG(tab []float64, nu, tempC, rhPct float64) float64 {
-	aw := math.Min(rhPct, 100) / 100
-	if aw <= 0 {
-		aw = 1e-6
-	}
-	return nu * leach.GasConstantJPerMolK * (tempC + leach.KelvinOffset) * (math.Log(aw) - lnAwEq(tab, tempC))
+// deltaG returns ΔG (J/mol) of gypsum → phase at tempC for ln a_w, from
+// the tabulated equilibrium water activity; nu is the water released:
+//
+//	ΔG = ν·R·T·(ln a_w − ln a_w,eq(T))
+func deltaG(tab []float64, nu, tempC, lnAw float64) float64 {
+	return nu * leach.GasConstantJPerMolK * (tempC + leach.KelvinOffset) * (lnAw - lnAwEq(tab, tempC))
 }
 
 // equilibriumRHPct is the gypsum–bassanite equilibrium RH at tempC.

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"path/filepath"
 	"runtime"
 	"sync"
 	"time"
@@ -37,7 +38,7 @@ func Run(p *Project, opt Options) (retOut *Output, retErr error) {
 	out := &Output{
 		Tool:     Tool{Name: "gyprisk", Version: opt.ToolVersion},
 		RunDate:  opt.Now.UTC().Format(time.RFC3339),
-		Project:  displayPath(p, filepath_base(p.Path)),
+		Project:  displayPath(p, filepath.Base(p.Path)),
 		Database: leach.Database(),
 		Invented: p.Invented,
 	}

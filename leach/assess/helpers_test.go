@@ -82,3 +82,26 @@ func (h hourRowRecords) records() []climate.Record {
 	}
 	return out
 }
+
+// outdoorHours reads a test project's outdoor record and precomputes its
+// site hours and the chemistry, as Run does for the present climate.
+func outdoorHours(t testing.TB, p *Project) (*siteHours, *chemistry) {
+	t.Helper()
+	rec, err := p.loadRecord(p.Site.Climate, roleOutdoor)
+	if err != nil {
+		t.Fatal(err)
+	}
+	st, err := p.site()
+	if err != nil {
+		t.Fatal(err)
+	}
+	sh, err := newSiteHours(st, rec.hourly, rec.hourly.Records)
+	if err != nil {
+		t.Fatal(err)
+	}
+	chem, err := newChemistry()
+	if err != nil {
+		t.Fatal(err)
+	}
+	return sh, chem
+}

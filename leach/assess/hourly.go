@@ -347,7 +347,7 @@ func (r *elementRun) step(i int, h *hourState, mm *mould.Model) {
 	// hindered): ΔG = ν·R·T·(ln a_w − ln a_w,eq), so the sign needs no
 	// more than the one logarithm.
 	lnAw := lnWaterActivity(rhc)
-	dgB := 1.5 * leach.GasConstantJPerMolK * (t + leach.KelvinOffset) * (lnAw - lnAwEq(chem.lnAwEqBas, t))
+	dgB := deltaG(chem.lnAwEqBas, 1.5, t, lnAw)
 	if dgB < 0 {
 		r.unstableS += dt
 	}

@@ -17,16 +17,7 @@ func TestMonthlyCriterionMatchesClimate(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	rec, err := p.loadRecord(p.Site.Climate, roleOutdoor)
-	if err != nil {
-		t.Fatal(err)
-	}
-	st, _ := p.site()
-	sh, err := newSiteHours(st, rec.hourly, rec.hourly.Records)
-	if err != nil {
-		t.Fatal(err)
-	}
-	chem, _ := newChemistry()
+	sh, chem := outdoorHours(t, p)
 	r, err := assessElement(e, sh, nil, chem, true)
 	if err != nil {
 		t.Fatal(err)

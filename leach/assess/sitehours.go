@@ -3,7 +3,6 @@ package assess
 import (
 	"fmt"
 	"math"
-	"path/filepath"
 	"runtime"
 	"sync"
 	"time"
@@ -247,8 +246,6 @@ func zeroNaN(v float64) float64 {
 	}
 	return v
 }
-
-func filepath_base(p string) string { return filepath.Base(p) }
 
 // time returns the end of interval i.
 func (sh *siteHours) time(i int) time.Time {

@@ -104,16 +104,7 @@ func TestNullSampleMatchesDeterministic(t *testing.T) {
 	rows := synthYear(24*120, 7, 1.5)
 	proj := wallProject + "runoff_height_m = 3\n\n[[element.variant]]\nid = \"finish\"\nrepellent_fraction = 0.6\n\n[[element.variant]]\nid = \"top\"\ntilt_deg = 20\n"
 	p := testProject(t, proj, map[string]string{"c.csv": csvRecord(testStart, rows)})
-	rec, err := p.loadRecord(p.Site.Climate, roleOutdoor)
-	if err != nil {
-		t.Fatal(err)
-	}
-	st, _ := p.site()
-	sh, err := newSiteHours(st, rec.hourly, rec.hourly.Records)
-	if err != nil {
-		t.Fatal(err)
-	}
-	chem, _ := newChemistry()
+	sh, chem := outdoorHours(t, p)
 	null := [numMC]float64{mcSolubility: 1, mcRateConst: 1, mcFilmThick: 1, mcContact: 1, mcWallFactor: 1, mcDensity: 1, mcAbsorptance: 0}
 	for _, v := range []*ElementSpec{nil, &p.Elements[0].Variants[0], &p.Elements[0].Variants[1]} {
 		e, err := resolve(&p.Elements[0], v)
