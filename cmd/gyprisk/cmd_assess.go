@@ -34,7 +34,7 @@ func (o *assessOptions) AddFlags(fs *pflag.FlagSet) {
 // addRunFlags adds the flags that shape the numbers, shared with demo and
 // batch.
 func (o *assessOptions) addRunFlags(fs *pflag.FlagSet) {
-	fs.IntVar(&o.samples, "samples", -1, "Monte Carlo samples for the uncertainty bands (0 = none; default: the project's [uncertainty] samples, else 0)")
+	fs.IntVar(&o.samples, "samples", 0, "Monte Carlo samples for the uncertainty bands (0 = none; when not given: the project's [uncertainty] samples, else none)")
 	fs.Uint64Var(&o.seed, "seed", 1, "random seed for the Monte Carlo samples; the same seed gives the same numbers")
 	fs.StringVar(&o.fixedDate, "fixed-date", "", "print this date (YYYY-MM-DD) as the run date instead of today, for reproducible outputs")
 	fs.BoolVarP(&o.quiet, "quiet", "q", false, "no progress on standard error")

@@ -217,3 +217,14 @@ func TestAssessSummaryGolden(t *testing.T) {
 		t.Errorf("summary differs from %s; run with -update and read the diff\n--- got\n%s", path, out)
 	}
 }
+
+// TestHelpOnEverySubcommand: --help exits 0 and prints the usage once,
+// with an example.
+func TestHelpOnEverySubcommand(t *testing.T) {
+	for name := range commands {
+		_, errOut, code := runCmd(name, "--help")
+		if code != 0 || strings.Count(errOut, "Usage: gyprisk "+name) != 1 || !strings.Contains(errOut, "Example") {
+			t.Errorf("%s --help: exit %d, output %q", name, code, errOut)
+		}
+	}
+}

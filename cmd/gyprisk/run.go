@@ -134,12 +134,12 @@ func newFlagSet(name, usage, description, example string, stderr io.Writer) *pfl
 }
 
 // parseFlags parses args and turns pflag's errors into usage errors.
-// --help prints the usage to stderr and returns errHelp (exit 0).
+// --help prints the usage to stderr (pflag calls fs.Usage) and returns
+// errHelp (exit 0).
 func parseFlags(fs *pflag.FlagSet, args []string) error {
-	fs.SetOutput(io.Discard) // we print usage ourselves, once
+	fs.SetOutput(io.Discard) // pflag's own messages: we report errors ourselves
 	err := fs.Parse(args)
 	if errors.Is(err, pflag.ErrHelp) {
-		fs.Usage()
 		return errHelp
 	}
 	if err != nil {
