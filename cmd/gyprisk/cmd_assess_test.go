@@ -228,3 +228,46 @@ func TestHelpOnEverySubcommand(t *testing.T) {
 		}
 	}
 }
+
+// TestAssessJSONContract: every key the assessment and options issues
+// promise is present in the JSON (users' scripts rely on them).
+func TestAssessJSONContract(t *testing.T) {
+	out, errOut, code := runCmd("demo", "-o", "", "--json", "-", "--samples", "20", "--seed", "3", "-q")
+	if code != 0 {
+		t.Fatalf("exit %d: %s", code, errOut)
+	}
+	var doc map[string]any
+	if err := json.Unmarshal([]byte(out), &doc); err != nil {
+		t.Fatal(err)
+	}
+	has := func(m map[string]any, path string, keys ...string) {
+		for _, k := range keys {
+			if _, ok := m[k]; !ok {
+				t.Errorf("JSON lacks %s%s", path, k)
+			}
+		}
+	}
+	has(doc, "", "tool", "site", "climate", "elements")
+	has(doc["tool"].(map[string]any), "tool.", "name", "version")
+	has(doc["climate"].(map[string]any), "climate.", "start", "end", "coverage_pct")
+	elems := doc["elements"].([]any)
+	if len(elems) == 0 {
+		t.Fatal("no elements")
+	}
+	for _, x := range elems {
+		e := x.(map[string]any)
+		has(e, "elements[].", "id", "variant", "scenario", "material", "exposure",
+			"water", "leaching", "dehydration", "condensation", "mould", "frost", "ratings")
+		has(e["water"].(map[string]any), "water.", "deposited_l_m2_per_year", "runoff_in_l_m2_per_year", "wet_hours_per_year")
+		has(e["leaching"].(map[string]any), "leaching.", "dissolved_g_m2_per_year", "recession_mm_per_year", "years_to_limit",
+			"recession_mm_per_year_p10", "recession_mm_per_year_p50", "recession_mm_per_year_p90")
+		has(e["dehydration"].(map[string]any), "dehydration.", "unstable_hours_per_year", "anhydrite_favoured_hours_per_year", "max_surface_temp_c", "hours_above_52c_per_year")
+		has(e["condensation"].(map[string]any), "condensation.", "hours_per_year", "condensate_kg_m2_per_year")
+		has(e["mould"].(map[string]any), "mould.", "index_max", "months_over_80pct")
+		has(e["frost"].(map[string]any), "frost.", "wet_freeze_thaw_cycles_per_year")
+		has(e["ratings"].(map[string]any), "ratings.", "leaching", "dehydration", "condensation", "mould")
+		if l := e["leaching"].(map[string]any); l["years_to_limit"] != nil {
+			has(l, "leaching.", "years_to_limit_p10", "years_to_limit_p50", "years_to_limit_p90")
+		}
+	}
+}
