@@ -248,3 +248,31 @@ func TestBrokenRecordNamesLine(t *testing.T) {
 		t.Errorf("err = %v, want the record's line 3", err)
 	}
 }
+
+// TestRangeErrorPointsAtTheRightElement: a value out of range in the
+// second element is reported at its own line and column, not at the first
+// element's key of the same name.
+func TestRangeErrorPointsAtTheRightElement(t *testing.T) {
+	src := wallProject + `
+[[element]]
+id = "second"
+material = "gypsum-plaster"
+azimuth_deg = 90
+tilt_deg =  200
+height_m = 3
+thickness_mm = 10
+
+  [[element.variant]]
+  id = "v"
+  wall_factor = 7
+`
+	_, err := Parse("site.toml", []byte(src))
+	if err == nil || !strings.Contains(err.Error(), "site.toml:22:13 (element.tilt_deg)") {
+		t.Errorf("err = %v, want it at site.toml:22:13", err)
+	}
+	src = strings.Replace(src, "tilt_deg =  200", "tilt_deg = 90", 1)
+	_, err = Parse("site.toml", []byte(src))
+	if err == nil || !strings.Contains(err.Error(), "site.toml:28:17 (element.variant.wall_factor)") {
+		t.Errorf("err = %v, want it at site.toml:28:17", err)
+	}
+}

@@ -138,10 +138,11 @@ type UncertaintySpec struct {
 // ProjectError is a mistake in a project file, with the position of the
 // offending key where it is known.
 type ProjectError struct {
-	File string
-	Line int // 0 when unknown
-	Key  string
-	Err  error
+	File   string
+	Line   int // 0 when unknown
+	Column int // of the value, 1-based; 0 when unknown
+	Key    string
+	Err    error
 }
 
 func (e *ProjectError) Error() string {
@@ -149,6 +150,9 @@ func (e *ProjectError) Error() string {
 	b.WriteString(e.File)
 	if e.Line > 0 {
 		fmt.Fprintf(&b, ":%d", e.Line)
+		if e.Column > 0 {
+			fmt.Fprintf(&b, ":%d", e.Column)
+		}
 	}
 	if e.Key != "" {
 		fmt.Fprintf(&b, " (%s)", e.Key)
@@ -217,32 +221,109 @@ func Parse(path string, data []byte) (*Project, error) {
 	return &p, nil
 }
 
-// keyLine finds the line of the first assignment to the last part of key
-// within its table, or 0.
+// keyLine finds the line of the first assignment to the last part of key,
+// or of the key's table header, or 0. It serves keys whose table instance
+// is not known (TOML's undecoded keys).
 func keyLine(data []byte, key toml.Key) int {
+	header, col := keyPos(data, key.String(), nil)
+	if col > 0 {
+		return header
+	}
 	name := key[len(key)-1]
-	for i, line := range bytes.Split(data, []byte("\n")) {
-		l := strings.TrimSpace(string(line))
-		if strings.HasPrefix(l, name) {
-			rest := strings.TrimSpace(l[len(name):])
-			if strings.HasPrefix(rest, "=") {
-				return i + 1
-			}
-		}
-		if l == "["+key.String()+"]" || l == "[["+key.String()+"]]" {
+	for i, l := range bytes.Split(data, []byte("\n")) {
+		if _, ok := assignment(strings.TrimSpace(string(l)), name); ok {
 			return i + 1
 		}
 	}
-	return 0
+	return header
+}
+
+// keyPos finds where dotted key ("element.variant.tilt_deg") is assigned
+// in the instance of its table given by idx (the index of each array
+// table on the path: element i, variant j of it, scenario k; nil: the
+// first instance). It returns the line and the column of the value
+// (1-based), the instance's header line if the key is not written there,
+// or 0, 0.
+func keyPos(data []byte, dotted string, idx []int) (line, col int) {
+	parts := strings.Split(dotted, ".")
+	table, name := strings.Join(parts[:len(parts)-1], "."), parts[len(parts)-1]
+	counts := map[string]int{} // instances of each array table seen so far
+	current, header := "", 0
+	matches := func() bool {
+		if current != table {
+			return false
+		}
+		path := strings.Split(table, ".")
+		for d := range path {
+			want := 0
+			if d < len(idx) {
+				want = idx[d]
+			}
+			if counts[strings.Join(path[:d+1], ".")]-1 != want {
+				return false
+			}
+		}
+		return true
+	}
+	for i, raw := range bytes.Split(data, []byte("\n")) {
+		l := strings.TrimSpace(string(raw))
+		switch {
+		case strings.HasPrefix(l, "[["):
+			current = strings.TrimSpace(strings.TrimSuffix(strings.TrimPrefix(l, "[["), "]]"))
+			counts[current]++
+			for k := range counts { // a new element restarts its variants
+				if strings.HasPrefix(k, current+".") {
+					delete(counts, k)
+				}
+			}
+			if matches() {
+				header = i + 1
+			}
+			continue
+		case strings.HasPrefix(l, "["):
+			current = strings.TrimSpace(strings.TrimSuffix(strings.TrimPrefix(l, "["), "]"))
+			counts[current] = 1 // a plain table has one instance
+			if matches() {
+				header = i + 1
+			}
+			continue
+		}
+		if !matches() {
+			continue
+		}
+		if off, ok := assignment(l, name); ok {
+			lead := len(raw) - len(bytes.TrimLeft(raw, " \t"))
+			return i + 1, lead + off + 1
+		}
+	}
+	return header, 0
+}
+
+// assignment reports whether the trimmed line l assigns name, and the
+// byte offset of the value within l.
+func assignment(l, name string) (int, bool) {
+	if !strings.HasPrefix(l, name) {
+		return 0, false
+	}
+	rest := l[len(name):]
+	trimmed := strings.TrimLeft(rest, " \t")
+	if !strings.HasPrefix(trimmed, "=") {
+		return 0, false
+	}
+	after := strings.TrimLeft(trimmed[1:], " \t")
+	return len(l) - len(after), true
 }
 
 // check validates values that TOML types cannot: ranges, choices and
 // required keys.
 func (p *Project) check(data []byte) error {
-	bad := func(key string, format string, a ...any) error {
-		k := strings.Split(key, ".")
-		return &ProjectError{File: p.Path, Line: keyLine(data, k), Key: key, Err: fmt.Errorf(format, a...)}
+	at := func(idx ...int) func(key, format string, a ...any) error {
+		return func(key, format string, a ...any) error {
+			line, col := keyPos(data, key, idx)
+			return &ProjectError{File: p.Path, Line: line, Column: col, Key: key, Err: fmt.Errorf(format, a...)}
+		}
 	}
+	bad := at()
 	s := &p.Site
 	if s.LatitudeDeg == nil || s.LongitudeDeg == nil {
 		return bad("site.latitude_deg", "missing: latitude_deg and longitude_deg are required (they place the sun)")
@@ -265,6 +346,7 @@ func (p *Project) check(data []byte) error {
 	seen := map[string]bool{}
 	for i := range p.Elements {
 		e := &p.Elements[i]
+		bad := at(i)
 		if e.ID == "" {
 			return bad("element.id", "element %d has no id", i+1)
 		}
@@ -278,6 +360,7 @@ func (p *Project) check(data []byte) error {
 		vseen := map[string]bool{"base": true}
 		for j := range e.Variants {
 			v := &e.Variants[j]
+			bad := at(i, j)
 			if v.ID == "" {
 				return bad("element.variant.id", "variant %d of element %q has no id", j+1, e.ID)
 			}
@@ -294,7 +377,8 @@ func (p *Project) check(data []byte) error {
 		}
 	}
 	sseen := map[string]bool{"present": true}
-	for _, sc := range p.Scenarios {
+	for k, sc := range p.Scenarios {
+		bad := at(k)
 		if sc.ID == "" {
 			return bad("scenario.id", "a [[scenario]] has no id")
 		}
