@@ -74,13 +74,15 @@ func Run(p *Project, opt Options) (retOut *Output, retErr error) {
 		base := &p.Elements[i]
 		e, err := resolve(base, nil)
 		if err != nil {
-			return nil, &ProjectError{File: p.Path, Key: "element", Err: err}
+			line, _ := keyPos(p.data, "element.id", []int{i})
+			return nil, &ProjectError{File: p.Path, Line: line, Key: "element", Err: err}
 		}
 		cases = append(cases, e)
 		for j := range base.Variants {
 			v, err := resolve(base, &base.Variants[j])
 			if err != nil {
-				return nil, &ProjectError{File: p.Path, Key: "element.variant", Err: fmt.Errorf("variant %q: %w", base.Variants[j].ID, err)}
+				line, _ := keyPos(p.data, "element.variant.id", []int{i, j})
+				return nil, &ProjectError{File: p.Path, Line: line, Key: "element.variant", Err: fmt.Errorf("variant %q: %w", base.Variants[j].ID, err)}
 			}
 			cases = append(cases, v)
 		}
