@@ -37,8 +37,11 @@
 // little on the unsafe side. It puts the gypsum–anhydrite equilibrium in
 // liquid water at about 42 °C, inside the published spread (38–42 °C from
 // solubility measurements, 58 ± 2 °C from Hardie 1967, Am. Mineral. 52,
-// 171), but at 23 °C at a water activity of 0.805, against Hardie's
-// measured 0.770. The tests record these gaps and fail if they grow.
+// 171), and at 23 °C at a water activity of 0.805: above Hardie's measured
+// 0.770, below 0.845, where his line would pass if shifted to the
+// solubility-based transition; the published determinations disagree by
+// that much. The tests check the band, and record the 70–100 °C solubility
+// gap and fail if it grows.
 //
 // # Kinetics
 //

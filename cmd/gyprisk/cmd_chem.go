@@ -82,7 +82,7 @@ var chemNotes = []string{
 	"The anhydrite route is kinetically hindered at ordinary temperatures: gypsum persists for centuries where anhydrite is the stable phase, so in-service dehydration risk is judged on the bassanite route.",
 	"Solubility in g/L is the mass of the phase itself (CaSO4·2H2O, CaSO4·0.5H2O or CaSO4) dissolved per litre of saturated solution; bassanite and anhydrite values hold only while the phase persists.",
 	"Known limits of the database: it places the gypsum–bassanite transition in liquid water near 107.5 °C, inside the 100–120 °C of trade practice but about 8.5 K above the measured 99 °C, so it slightly understates dehydration risk in hot water.",
-	"Known limits of the database: gypsum solubility is within 5 % of handbook values from 0 to 60 °C, the range of water on building surfaces, but 6–11 % low from 70 to 100 °C; it puts the gypsum–anhydrite equilibrium at 23 °C at 80.5 % RH, against 77 % measured (Hardie 1967).",
+	"Known limits of the database: gypsum solubility is within 5 % of handbook values from 0 to 60 °C, the range of water on building surfaces, but 6–11 % low from 70 to 100 °C; it puts the gypsum–anhydrite equilibrium at 23 °C at 80.5 % RH, against 77 % measured (Hardie 1967), inside the spread of the published determinations.",
 	"No published rate law for gypsum dehydration could be verified, so only the thermodynamic driving force is given.",
 }
 
