@@ -102,20 +102,18 @@ summary table.`,
 // assessAndWrite runs one project and writes the outputs the options ask
 // for; with none, it prints the summary table to stdout.
 func assessAndWrite(p *assess.Project, opt assess.Options, o *assessOptions, stdout, stderr io.Writer) error {
-	if o.hourlyPath != "" {
-		var out *assess.Output
-		err := report.WriteFileAtomic(o.hourlyPath, func(w io.Writer) error {
-			opt.Hourly = w
-			var err error
-			out, err = assess.Run(p, opt)
-			return err
-		})
-		if err != nil {
-			return err
-		}
-		return writeOutputs(out, o, stdout)
+	var out *assess.Output
+	runTo := func(hourly io.Writer) (err error) {
+		opt.Hourly = hourly
+		out, err = assess.Run(p, opt)
+		return err
 	}
-	out, err := assess.Run(p, opt)
+	var err error
+	if o.hourlyPath != "" {
+		err = report.WriteFileAtomic(o.hourlyPath, runTo) // the trace is written during the run
+	} else {
+		err = runTo(nil)
+	}
 	if err != nil {
 		return err
 	}

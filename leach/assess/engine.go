@@ -170,7 +170,7 @@ func Run(p *Project, opt Options) (retOut *Output, retErr error) {
 		roomHours := map[string]*siteHours{}
 		for path, r := range rooms {
 			recs, _ := sc.Apply(r.hourly.Records)
-			rh, err := newRoomHours(r.hourly, recs)
+			rh, err := newHours(r.hourly, recs) // a room record: no sun, rain or wind
 			if err != nil {
 				return nil, err
 			}

@@ -328,7 +328,7 @@ func (r *elementRun) step(i int, h *hourState, mm *mould.Model) {
 	var dissolved float64
 	if water > 0 && t > 0 {
 		// Frozen water (surface below 0 °C) dissolves nothing.
-		sat := r.filmSaturation(water, t, h.slopeDeg, dt)
+		sat := filmSat(chem.film, water, t, h.slopeDeg, e.flowLengthM, dt, 1, 1)
 		ceq := chem.sol.At(clampChem(t))
 		dissolved = water * ceq * sat
 		r.boundG += water * ceq * sh.wTrap[i] / dt
@@ -418,19 +418,14 @@ func (r *elementRun) step(i int, h *hourState, mm *mould.Model) {
 	}
 }
 
-// filmSaturation is the fraction of saturation the water reaches in its
-// contact with the surface in one interval of dtS seconds: the water runs
-// as a laminar film (Nusselt) over the element's flow length, carrying
-// the flow of the hour, and dissolves gypsum by the rate law with
-// diffusion across the film (leach.FilmSaturation). Water that stays
-// (condensate, or a film slower than the interval) is in contact for the
-// whole interval.
-func (r *elementRun) filmSaturation(waterL, tempC, slopeDeg, dtS float64) float64 {
-	return filmSat(r.chem.film, waterL, tempC, slopeDeg, r.e.flowLengthM, dtS, 1, 1)
-}
-
-// filmSat is filmSaturation with multipliers on the film thickness and the
-// contact time (the Monte Carlo inputs of the contact model).
+// filmSat is the fraction of saturation the water reaches in its contact
+// with the surface in one interval of dtS seconds: the water runs as a
+// laminar film (Nusselt) over the element's flow length, carrying the flow
+// of the hour, and dissolves gypsum by the rate law with diffusion across
+// the film (leach.FilmModel). Water that stays (condensate, or a film
+// slower than the interval) is in contact for the whole interval.
+// thickMul and contactMul scale the film thickness and the contact time
+// (1 in the deterministic run).
 func filmSat(film *leach.FilmModel, waterL, tempC, slopeDeg, flowLengthM, dtS, thickMul, contactMul float64) float64 {
 	// Flow per metre of width at the foot of the element, m²/s.
 	q := waterL * 1e-3 * flowLengthM / dtS

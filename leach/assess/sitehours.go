@@ -141,11 +141,6 @@ func parallelChunks(n int, fn func(lo, hi int)) {
 	wg.Wait()
 }
 
-// newRoomHours precomputes a room record's hours (no sun, rain or wind).
-func newRoomHours(s *climate.Series, recs []climate.Record) (*siteHours, error) {
-	return newHours(s, recs)
-}
-
 // newHours fills the calendar and the air state, and checks what the
 // integration needs: times strictly increasing and no value that cannot
 // be worked with. Missing temperature or humidity in an hour is carried
