@@ -43,8 +43,8 @@ func (p *Project) loadRecord(rel, role string) (*record, error) {
 	if err != nil {
 		return nil, fmt.Errorf("%s: %w", role, err)
 	}
-	sum := make(chan [32]byte, 1)
-	go func() { sum <- sha256.Sum256(data) }()
+	sum := make(chan string, 1)
+	go func() { sum <- hashBytes(data) }() // beside the parse
 
 	cfg := climate.ReaderConfig{FileName: name}
 	if role == roleOutdoor {
@@ -79,7 +79,7 @@ func (p *Project) loadRecord(rel, role string) (*record, error) {
 	return &record{
 		raw:    raw,
 		hourly: hourly,
-		input: InputFile{Role: role, Path: displayPath(p, rel), SHA256: hex.EncodeToString(h[:]),
+		input: InputFile{Role: role, Path: displayPath(p, rel), SHA256: h,
 			Start: raw.Start(), End: raw.End()},
 	}, nil
 }
